@@ -1,0 +1,136 @@
+/**
+ * One member check, from the parsed request to the presented response:
+ * normalise (units to SI, catalogue names resolved) -> engine -> present.
+ */
+
+import { analyseMember } from '../engine/analysis/analyse-member.js';
+import type { MemberAnalysis } from '../engine/analysis/result.js';
+import { sampleDiagrams } from '../engine/analysis/sample-diagrams.js';
+import { SCREENING_CAUTION } from '../engine/caution.js';
+import { EngineError } from '../engine/engine-error.js';
+import type { Material } from '../engine/materials/material.js';
+import { selfWeightLoad } from '../engine/member/self-weight.js';
+import { STANDARD_GRAVITY, type LoadModel, type MemberModel } from '../engine/member/model.js';
+import type { SectionProperties } from '../engine/sections/section-properties.js';
+import type { MaterialLookup, SectionLookup } from './normalise/catalogue-lookup.js';
+import { resolveMaterial, type ResolvedMaterial } from './normalise/material.js';
+import { normaliseLoads, normaliseMember, type NormalisedMember } from './normalise/member.js';
+import { QuantityReader, type Path } from './normalise/quantity-reader.js';
+import { resolveSection, type ResolvedSection } from './normalise/section.js';
+import { resolveOutputUnits, present, type OutputUnits } from './output-units.js';
+import { presentDiagrams, presentEquilibrium, presentExtremes, presentReactions } from './present/analysis.js';
+import { presentMaterial } from './present/material.js';
+import { presentSection } from './present/section.js';
+import { jsonPointer, ProblemError } from './problems.js';
+import type { MemberCheckRequest } from './schemas/member-check-request.js';
+import type { MemberCheckResponse } from './schemas/member-check-response.js';
+import { DEFAULT_SAMPLES } from './schemas/output-options.js';
+
+export interface Catalogues {
+  readonly sections: SectionLookup;
+  readonly materials: MaterialLookup;
+}
+
+/** What a request says apart from its section: shared by every candidate of a sizing. */
+export interface NormalisedCheck {
+  readonly member: NormalisedMember;
+  readonly loads: readonly LoadModel[];
+  readonly loadLabels: readonly (string | undefined)[];
+  readonly supportLabels: readonly (string | undefined)[];
+  readonly selfWeight: boolean;
+  readonly samples: number;
+  readonly units: OutputUnits;
+  readonly material: (thickestElement: number) => ResolvedMaterial;
+  readonly base: Path;
+}
+
+/** Everything but the section, converted and validated; throws one problem listing every bad field. */
+export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, catalogues: Catalogues, base: Path, reader = new QuantityReader()): NormalisedCheck {
+  const member = normaliseMember(request.member, reader, [...base, 'member']);
+  const loads = normaliseLoads(request.loads, reader, [...base, 'loads']);
+  const material = resolveMaterial(request.material, catalogues.materials, reader, [...base, 'material']);
+  const units = resolveOutputUnits(request.output?.units, [...base, 'output', 'units']);
+  reader.finish();
+  return {
+    member,
+    loads,
+    loadLabels: request.loads.map((load) => load.label),
+    supportLabels: request.member.supports.map((support) => support.label),
+    selfWeight: request.selfWeight ?? false,
+    samples: request.output?.samples ?? DEFAULT_SAMPLES,
+    units,
+    material,
+    base,
+  };
+}
+
+export function memberModel(check: NormalisedCheck, section: SectionProperties, material: Material): MemberModel {
+  const loads = check.selfWeight ? [...check.loads, selfWeightLoad(section.area, material.density, check.member.length)] : check.loads;
+  return {
+    length: check.member.length,
+    supports: check.member.supports,
+    hinges: check.member.hinges,
+    loads,
+    stiffness: {
+      axial: material.elasticModulus * section.area,
+      bendingZ: material.elasticModulus * section.secondMomentZ,
+      bendingY: material.elasticModulus * section.secondMomentY,
+      torsional: material.shearModulus * section.torsionConstant,
+    },
+  };
+}
+
+/** The engine's own errors, as problems whose pointers are rooted where this check sits. */
+export function analyseOrProblem(model: MemberModel, base: Path): MemberAnalysis {
+  try {
+    return analyseMember(model);
+  } catch (error) {
+    if (!(error instanceof EngineError)) throw error;
+    const pointer = jsonPointer([...base, ...error.path]);
+    if (error.kind === 'unstable-member') {
+      throw new ProblemError('unstableMember', error.message, error.path.length > 0 ? [{ pointer, message: error.message }] : [], { mechanism: error.details });
+    }
+    if (error.kind === 'outside-member') throw new ProblemError('invalidInput', `${pointer}: ${error.message}`, [{ pointer, message: error.message }]);
+    throw new ProblemError('notApplicable', error.message, error.path.length > 0 ? [{ pointer, message: error.message }] : []);
+  }
+}
+
+export interface CheckedMember {
+  readonly section: ResolvedSection;
+  readonly material: Material;
+  readonly model: MemberModel;
+  readonly analysis: MemberAnalysis;
+}
+
+export function checkWithSection(check: NormalisedCheck, section: ResolvedSection): CheckedMember {
+  const { material } = check.material(section.properties.thickestElement);
+  const model = memberModel(check, section.properties, material);
+  const analysis = analyseOrProblem(model, check.base);
+  return { section, material, model, analysis };
+}
+
+export function presentCheck(check: NormalisedCheck, checked: CheckedMember): MemberCheckResponse {
+  const { units } = check;
+  const { section, material, analysis } = checked;
+  const diagrams = sampleDiagrams(analysis, check.samples);
+  const selfWeightIntensity = check.selfWeight ? material.density * section.properties.area * STANDARD_GRAVITY : 0;
+  return {
+    units: units.names,
+    member: { length: present(units, 'length', analysis.length), nodes: analysis.nodes.map((x) => present(units, 'length', x)) },
+    section: presentSection(section, units, material.density),
+    material: presentMaterial(material, units),
+    selfWeight: { applied: check.selfWeight, intensity: present(units, 'forcePerLength', selfWeightIntensity) },
+    reactions: presentReactions(analysis, check.supportLabels, units),
+    diagrams: presentDiagrams(diagrams, units),
+    extremes: presentExtremes(analysis, units),
+    equilibrium: presentEquilibrium(analysis, units),
+    notices: [SCREENING_CAUTION],
+  };
+}
+
+export function runMemberCheck(request: MemberCheckRequest, catalogues: Catalogues, base: Path = []): MemberCheckResponse {
+  const reader = new QuantityReader();
+  const section = resolveSection(request.section, catalogues.sections, reader, [...base, 'section']);
+  const check = normaliseCheck(request, catalogues, base, reader);
+  return presentCheck(check, checkWithSection(check, section()));
+}

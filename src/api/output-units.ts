@@ -1,0 +1,78 @@
+/**
+ * The units a response is presented in: SI by default, the US customary set, or a unit per kind of
+ * quantity. Resolved once per request into factors, so presenting a value is one division.
+ */
+
+import { invalidField, ProblemError, type FieldError } from './problems.js';
+import { QUANTITY_KINDS, unitFactorToSI, type QuantityKind } from './quantities.js';
+
+export type OutputUnitsRequest = 'SI' | 'US' | Partial<Record<QuantityKind, string>> | undefined;
+
+const SI_UNITS: Record<QuantityKind, string> = { ...QUANTITY_KINDS };
+
+/** US customary practice: inches for sections and deflections, kips, kip-feet and ksi. */
+const US_UNITS: Record<QuantityKind, string> = {
+  length: 'in',
+  deflection: 'in',
+  force: 'kip',
+  moment: 'kip*ft',
+  stress: 'ksi',
+  forcePerLength: 'kip/ft',
+  momentPerLength: 'kip*ft/ft',
+  density: 'lbm/ft^3',
+  angle: 'rad',
+  translationalStiffness: 'kip/in',
+  rotationalStiffness: 'kip*in/rad',
+  area: 'in^2',
+  sectionModulus: 'in^3',
+  secondMoment: 'in^4',
+  warpingConstant: 'in^6',
+  massPerLength: 'lbm/ft',
+  torsionalShearPerTorque: 'in^-3',
+};
+
+export interface OutputUnits {
+  /** The unit each kind is presented in, echoed in the response. */
+  readonly names: Readonly<Record<QuantityKind, string>>;
+  /** SI units per presented unit. */
+  readonly factors: Readonly<Record<QuantityKind, number>>;
+}
+
+function build(names: Record<QuantityKind, string>): OutputUnits {
+  const factors = {} as Record<QuantityKind, number>;
+  for (const kind of Object.keys(names) as QuantityKind[]) {
+    const factor = unitFactorToSI(names[kind], kind);
+    if (factor === undefined) throw new Error(`unit table: ${names[kind]} is not a ${kind}`);
+    factors[kind] = factor;
+  }
+  return { names, factors };
+}
+
+export const SI_OUTPUT: OutputUnits = build(SI_UNITS);
+export const US_OUTPUT: OutputUnits = build(US_UNITS);
+
+/** Resolves output.units; `path` is where it sits in the request, for the error pointers. */
+export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (string | number)[]): OutputUnits {
+  if (request === undefined || request === 'SI') return SI_OUTPUT;
+  if (request === 'US') return US_OUTPUT;
+  const names = { ...SI_UNITS };
+  const factors = { ...SI_OUTPUT.factors };
+  const errors: FieldError[] = [];
+  for (const [kind, unitName] of Object.entries(request) as [QuantityKind, string][]) {
+    const factor = unitFactorToSI(unitName, kind);
+    if (factor === undefined) {
+      errors.push(invalidField([...path, kind], `"${unitName}" is not a unit of ${kind} (SI: ${QUANTITY_KINDS[kind]})`).errors[0] as FieldError);
+      continue;
+    }
+    names[kind] = unitName;
+    factors[kind] = factor;
+  }
+  if (errors.length > 0) throw new ProblemError('invalidInput', 'Some output units are not valid.', errors);
+  return { names, factors };
+}
+
+/** An SI value in the presented unit; -0 becomes 0. */
+export function present(units: OutputUnits, kind: QuantityKind, valueSI: number): number {
+  const value = valueSI / units.factors[kind];
+  return value === 0 ? 0 : value;
+}

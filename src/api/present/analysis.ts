@@ -1,0 +1,50 @@
+/** Presenting reactions, diagrams, extremes and the equilibrium check in the response's units. */
+
+import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis } from '../../engine/analysis/result.js';
+import { present, type OutputUnits } from '../output-units.js';
+import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
+
+export interface SampledDiagrams {
+  readonly x: readonly number[];
+  readonly values: Readonly<Record<DiagramField, readonly number[]>>;
+}
+
+export function presentReactions(analysis: MemberAnalysis, labels: readonly (string | undefined)[], units: OutputUnits) {
+  return analysis.reactions.map((reaction, i) => ({
+    ...(labels[i] === undefined ? {} : { label: labels[i] }),
+    position: present(units, 'length', reaction.position),
+    fx: present(units, 'force', reaction.fx),
+    fy: present(units, 'force', reaction.fy),
+    fz: present(units, 'force', reaction.fz),
+    mx: present(units, 'moment', reaction.mx),
+    my: present(units, 'moment', reaction.my),
+    mz: present(units, 'moment', reaction.mz),
+  }));
+}
+
+export function presentDiagrams(diagrams: SampledDiagrams, units: OutputUnits) {
+  const out: Record<string, number[]> = { x: diagrams.x.map((x) => present(units, 'length', x)) };
+  for (const field of DIAGRAM_FIELDS) {
+    const kind = DIAGRAM_FIELD_INFO[field].kind;
+    out[field] = diagrams.values[field].map((value) => present(units, kind, value));
+  }
+  return out as Record<'x' | DiagramField, number[]>;
+}
+
+export function presentExtremes(analysis: MemberAnalysis, units: OutputUnits) {
+  const out = {} as Record<DiagramField, { max: { value: number; position: number }; min: { value: number; position: number } }>;
+  for (const field of DIAGRAM_FIELDS) {
+    const kind = DIAGRAM_FIELD_INFO[field].kind;
+    const { max, min } = analysis.extremes[field];
+    out[field] = {
+      max: { value: present(units, kind, max.value), position: present(units, 'length', max.position) },
+      min: { value: present(units, kind, min.value), position: present(units, 'length', min.position) },
+    };
+  }
+  return out;
+}
+
+export function presentEquilibrium(analysis: MemberAnalysis, units: OutputUnits) {
+  const { force, moment, forceScale, momentScale } = analysis.equilibrium;
+  return { force, moment, forceScale: present(units, 'force', forceScale), momentScale: present(units, 'moment', momentScale) };
+}

@@ -1,0 +1,61 @@
+/** Presenting a resolved section in the response's units. */
+
+import type { SectionProperties } from '../../engine/sections/section-properties.js';
+import type { ResolvedSection } from '../normalise/section.js';
+import { present, type OutputUnits } from '../output-units.js';
+import type { QuantityKind } from '../quantities.js';
+import { SECTION_PROPERTY_FIELDS } from '../schemas/section-output.js';
+
+const CUSTOM_DIMENSION_KINDS: Record<string, QuantityKind> = {
+  area: 'area',
+  secondMomentZ: 'secondMoment',
+  secondMomentY: 'secondMoment',
+  torsionConstant: 'secondMoment',
+  sectionModulusZ: 'sectionModulus',
+  sectionModulusY: 'sectionModulus',
+  plasticModulusZ: 'sectionModulus',
+  plasticModulusY: 'sectionModulus',
+  warpingConstant: 'warpingConstant',
+  shearAreaY: 'area',
+  shearAreaZ: 'area',
+};
+
+export function presentSectionProperties(properties: SectionProperties, units: OutputUnits, density?: number) {
+  const numeric = Object.fromEntries(
+    Object.entries(SECTION_PROPERTY_FIELDS).map(([name, field]) => [name, present(units, field.kind, properties[name as keyof typeof SECTION_PROPERTY_FIELDS])]),
+  ) as Record<keyof typeof SECTION_PROPERTY_FIELDS, number>;
+  return {
+    shape: properties.shape,
+    ...numeric,
+    closed: properties.closed,
+    bendingCombination: properties.bendingCombination,
+    stressPoints: properties.stressPoints.map((point) => ({
+      y: present(units, 'length', point.y),
+      z: present(units, 'length', point.z),
+      label: point.label,
+    })),
+    ...(density === undefined ? {} : { massPerLength: present(units, 'massPerLength', properties.area * density) }),
+  };
+}
+
+export function presentSection(section: ResolvedSection, units: OutputUnits, density?: number) {
+  const dimensions: Record<string, string | number> = {};
+  for (const [key, value] of Object.entries(section.dimensions)) {
+    if (typeof value !== 'number') dimensions[key] = value as string;
+    else dimensions[key] = present(units, section.dimensions.shape === 'custom' ? (CUSTOM_DIMENSION_KINDS[key] ?? 'length') : 'length', value);
+  }
+  const entry = section.entry;
+  return {
+    ...(entry === undefined
+      ? {}
+      : {
+          designation: entry.designation,
+          family: entry.family,
+          standard: entry.standard,
+          source: entry.source,
+          nominalMassPerLength: present(units, 'massPerLength', entry.massPerLength),
+        }),
+    dimensions,
+    properties: presentSectionProperties(section.properties, units, density),
+  };
+}

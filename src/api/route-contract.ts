@@ -1,0 +1,31 @@
+/**
+ * A route's contract: the one description both the Fastify route and the OpenAPI document are built
+ * from, so the published contract cannot drift from what the service does.
+ */
+
+import type { z } from 'zod';
+import type { ProblemName } from './problems.js';
+
+export interface RouteContract {
+  readonly method: 'get' | 'post';
+  /** OpenAPI path template, e.g. "/v1/sections/{designation}". */
+  readonly path: string;
+  readonly operationId: string;
+  readonly summary: string;
+  readonly description: string;
+  readonly tag: string;
+  readonly body?: z.ZodType;
+  readonly query?: z.ZodObject;
+  readonly params?: z.ZodObject;
+  readonly response: z.ZodType;
+  readonly responseDescription: string;
+  /** The problems this route can answer with, besides the ones every route can. */
+  readonly problems: readonly ProblemName[];
+  /** A request that the tests send and that must be answered 200. */
+  readonly exampleBody?: unknown;
+}
+
+/** "/v1/sections/{designation}" -> "/v1/sections/:designation" */
+export function fastifyPath(openApiPath: string): string {
+  return openApiPath.replace(/\{([^}]+)\}/g, ':$1');
+}

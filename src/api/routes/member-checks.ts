@@ -1,0 +1,35 @@
+/** POST /v1/member-checks: analyse and check one member. */
+
+import type { FastifyInstance } from 'fastify';
+import { assertFinite } from '../finite-guard.js';
+import { runMemberCheck, type Catalogues } from '../member-check.js';
+import type { RouteContract } from '../route-contract.js';
+import { MEMBER_CHECK_EXAMPLE, memberCheckRequest } from '../schemas/member-check-request.js';
+import { memberCheckResponse } from '../schemas/member-check-response.js';
+import { parseBody } from '../validation.js';
+
+export const memberCheckContract: RouteContract = {
+  method: 'post',
+  path: '/v1/member-checks',
+  operationId: 'checkMember',
+  summary: 'Analyse and check one straight member',
+  description:
+    'Exact reactions, sampled diagrams with their exact extremes, deflections and the equilibrium residual of a straight prismatic member on any supports (statically indeterminate included), under point and distributed loads in any direction.',
+  tag: 'members',
+  body: memberCheckRequest,
+  response: memberCheckResponse,
+  responseDescription: 'The analysed member.',
+  problems: ['unknownDesignation', 'unknownGrade', 'unstableMember', 'impossibleGeometry', 'notApplicable'],
+  exampleBody: MEMBER_CHECK_EXAMPLE,
+};
+
+export function memberCheckRoutes(catalogues: Catalogues) {
+  return async function register(app: FastifyInstance): Promise<void> {
+    app.post('/v1/member-checks', async (request) => {
+      const body = parseBody(memberCheckRequest, request.body);
+      const result = runMemberCheck(body, catalogues);
+      assertFinite(result);
+      return result;
+    });
+  };
+}

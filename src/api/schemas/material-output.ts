@@ -1,0 +1,37 @@
+/** A resolved material in a response. */
+
+import type { Material } from '../../engine/materials/material.js';
+import type { QuantityKind } from '../quantities.js';
+import { presentedQuantity } from './quantity.js';
+import { z } from './zod.js';
+
+type NumericMaterialField = { [K in keyof Material]-?: Material[K] extends number ? K : never }[keyof Material];
+
+export const MATERIAL_FIELDS: Record<NumericMaterialField, { kind: QuantityKind | 'ratio'; description: string }> = {
+  elasticModulus: { kind: 'stress', description: "Young's modulus E." },
+  shearModulus: { kind: 'stress', description: 'Shear modulus G.' },
+  poissonRatio: { kind: 'ratio', description: "Poisson's ratio." },
+  yieldStrength: { kind: 'stress', description: 'Yield strength in tension (for the thickness band used).' },
+  compressiveYieldStrength: { kind: 'stress', description: 'Yield strength in compression.' },
+  ultimateStrength: { kind: 'stress', description: 'Ultimate tensile strength.' },
+  compressiveUltimateStrength: { kind: 'stress', description: 'Ultimate compressive strength.' },
+  shearYieldRatio: { kind: 'ratio', description: 'Shear yield strength / tensile yield strength.' },
+  density: { kind: 'density', description: 'Density.' },
+};
+
+const numeric = Object.fromEntries(
+  Object.entries(MATERIAL_FIELDS).map(([name, field]) => [
+    name,
+    field.kind === 'ratio' ? z.number().openapi({ description: `${field.description} Dimensionless.` }) : presentedQuantity(field.kind, field.description),
+  ]),
+) as Record<NumericMaterialField, z.ZodNumber>;
+
+export const materialOutput = z
+  .object({
+    grade: z.string(),
+    standard: z.string(),
+    ...numeric,
+    behaviour: z.enum(['ductile', 'brittle']),
+    source: z.string().openapi({ description: 'Where the values come from.' }),
+  })
+  .openapi('Material');

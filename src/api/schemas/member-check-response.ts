@@ -1,0 +1,37 @@
+/** The answer to POST /v1/member-checks. */
+
+import { QUANTITY_KINDS, type QuantityKind } from '../quantities.js';
+import { diagramsOutput, equilibriumOutput, extremesOutput, reactionOutput } from './analysis-output.js';
+import { materialOutput } from './material-output.js';
+import { resolvedSectionOutput } from './section-output.js';
+import { z } from './zod.js';
+
+export const unitsEcho = z
+  .object(Object.fromEntries((Object.keys(QUANTITY_KINDS) as QuantityKind[]).map((kind) => [kind, z.string()])) as Record<QuantityKind, z.ZodString>)
+  .openapi('Units', { description: 'The unit every kind of quantity in this response is given in.' });
+
+export const notices = z
+  .array(z.string())
+  .openapi({ description: 'Cautions and the limits of the calculation. The first is always the screening-calculation caution.' });
+
+export const memberCheckResponse = z
+  .object({
+    units: unitsEcho,
+    member: z.object({
+      length: z.number().openapi({ description: 'Member length, in the length unit.' }),
+      nodes: z.array(z.number()).openapi({ description: 'Node positions of the analysis (ends, supports, hinges, point loads, ends of distributed loads), in the length unit.' }),
+    }),
+    section: resolvedSectionOutput,
+    material: materialOutput,
+    selfWeight: z
+      .object({ applied: z.boolean(), intensity: z.number().openapi({ description: 'Self-weight per length (downward), in the forcePerLength unit; 0 when not applied.' }) })
+      .openapi({ description: 'Whether the member\'s own weight was added.' }),
+    reactions: z.array(reactionOutput).openapi({ description: 'One per support, in the order given.' }),
+    diagrams: diagramsOutput,
+    extremes: extremesOutput,
+    equilibrium: equilibriumOutput,
+    notices,
+  })
+  .openapi('MemberCheckResponse');
+
+export type MemberCheckResponse = z.infer<typeof memberCheckResponse>;

@@ -1,0 +1,39 @@
+/** What a request may ask of the response's form. */
+
+import { QUANTITY_KINDS, type QuantityKind } from '../quantities.js';
+import { z } from './zod.js';
+
+export const DEFAULT_SAMPLES = 101;
+export const MAX_SAMPLES = 10001;
+
+const unitMap = z
+  .strictObject(
+    Object.fromEntries(
+      (Object.keys(QUANTITY_KINDS) as QuantityKind[]).map((kind) => [
+        kind,
+        z.string().min(1).max(32).optional().openapi({ description: `Unit for ${kind} values (SI: ${QUANTITY_KINDS[kind]}).` }),
+      ]),
+    ) as Record<QuantityKind, z.ZodOptional<z.ZodString>>,
+  )
+  .openapi('UnitMap', { description: 'A unit per kind of quantity; kinds not named stay SI.', example: { length: 'mm', force: 'kN', moment: 'kN*m', stress: 'MPa' } });
+
+export const outputUnits = z
+  .union([z.enum(['SI', 'US']), unitMap])
+  .openapi('OutputUnits', {
+    description: 'SI (default); US (in, kip, kip*ft, ksi, kip/ft, in^4...); or a unit per kind of quantity. The response echoes the units used in `units`.',
+  });
+
+export const outputOptions = z
+  .strictObject({
+    samples: z
+      .number()
+      .int()
+      .min(2)
+      .max(MAX_SAMPLES)
+      .optional()
+      .openapi({ description: `Evenly spaced diagram points from 0 to the length, default ${DEFAULT_SAMPLES}, at most ${MAX_SAMPLES}; every node is added, twice where a diagram jumps.` }),
+    units: outputUnits.optional(),
+  })
+  .openapi('OutputOptions');
+
+export type OutputOptions = z.infer<typeof outputOptions>;

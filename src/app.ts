@@ -1,0 +1,82 @@
+/**
+ * The application factory: the service with its catalogues, routes, contract and error handling.
+ * Tests build it directly; main.ts adds only the environment, listening and shutdown.
+ */
+
+import { randomUUID } from 'node:crypto';
+import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import { sendProblem, registerErrorHandler } from './api/error-handler.js';
+import { RouteTable } from './api/method-not-allowed.js';
+import { buildOpenApiDocument } from './api/openapi/document.js';
+import { ProblemError } from './api/problems.js';
+import type { RouteContract } from './api/route-contract.js';
+import { docsRoutes } from './api/routes/docs.js';
+import { healthContracts, healthRoutes } from './api/routes/health.js';
+import { memberCheckContract, memberCheckRoutes } from './api/routes/member-checks.js';
+import { loadCatalogues, type LoadedCatalogues } from './catalogues/load-catalogues.js';
+
+export interface AppOptions {
+  /** Catalogues already loaded (tests); otherwise the embedded ones plus `companyCataloguePath`. */
+  readonly catalogues?: LoadedCatalogues;
+  /** A company catalogue file or folder of JSON files, added to the embedded catalogues. */
+  readonly companyCataloguePath?: string;
+  /** Largest accepted request body, bytes; default 1 MiB. */
+  readonly bodyLimit?: number;
+  readonly logger?: FastifyServerOptions['logger'];
+}
+
+export const DEFAULT_BODY_LIMIT = 1024 * 1024;
+
+/** The route contracts, in the order the document lists them. */
+export function routeContracts(): RouteContract[] {
+  return [memberCheckContract, ...healthContracts];
+}
+
+const REQUEST_ID = /^[\w.:-]{1,128}$/;
+
+export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
+  const app = Fastify({
+    logger: options.logger ?? false,
+    bodyLimit: options.bodyLimit ?? DEFAULT_BODY_LIMIT,
+    requestIdHeader: false,
+    genReqId: (request) => {
+      const given = request.headers['x-request-id'];
+      return typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
+    },
+    onProtoPoisoning: 'error',
+    onConstructorPoisoning: 'error',
+    return503OnClosing: true,
+  });
+  app.addHook('onRequest', async (request, reply) => {
+    reply.header('x-request-id', request.id);
+  });
+  registerErrorHandler(app);
+
+  const routes = new RouteTable();
+  routes.watch(app);
+  app.setNotFoundHandler((request, reply) => {
+    const allowed = routes.allowedMethods(request.url);
+    if (allowed.length > 0) {
+      reply.header('allow', allowed.join(', '));
+      return sendProblem(reply, new ProblemError('methodNotAllowed', `${request.method} is not accepted here; use ${allowed.join(' or ')}.`));
+    }
+    return sendProblem(reply, new ProblemError('notFound', `There is no resource at ${request.url.split('?')[0]}.`));
+  });
+
+  let ready = false;
+  const catalogues = options.catalogues ?? (await loadCatalogues({ companyPath: options.companyCataloguePath }));
+  const document = buildOpenApiDocument(routeContracts());
+
+  await app.register(docsRoutes(document));
+  await app.register(
+    healthRoutes(() => ({
+      status: ready ? 'ready' : 'loading',
+      catalogues: catalogues.sources,
+      sectionFamilies: catalogues.sectionFamilies,
+    })),
+  );
+  await app.register(memberCheckRoutes(catalogues));
+  await app.ready();
+  ready = true;
+  return app;
+}

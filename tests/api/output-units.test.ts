@@ -1,0 +1,40 @@
+import { describe, expect, it } from 'vitest';
+import { present, resolveOutputUnits, SI_OUTPUT, US_OUTPUT } from '../../src/api/output-units.js';
+import { ProblemError } from '../../src/api/problems.js';
+
+describe('resolveOutputUnits', () => {
+  it('defaults to SI', () => {
+    expect(resolveOutputUnits(undefined, [])).toBe(SI_OUTPUT);
+    expect(SI_OUTPUT.names.moment).toBe('N*m');
+    expect(present(SI_OUTPUT, 'force', 1500)).toBe(1500);
+  });
+
+  it('presents US customary values (NIST SP 811: 1 kip = 4448.2216152605 N, 1 ft = 0.3048 m)', () => {
+    expect(resolveOutputUnits('US', [])).toBe(US_OUTPUT);
+    expect(present(US_OUTPUT, 'force', 4448.2216152605)).toBeCloseTo(1, 12);
+    expect(present(US_OUTPUT, 'moment', 4448.2216152605 * 0.3048)).toBeCloseTo(1, 12);
+    expect(present(US_OUTPUT, 'length', 0.0254)).toBeCloseTo(1, 12);
+  });
+
+  it('takes a unit per kind and leaves the rest SI', () => {
+    const units = resolveOutputUnits({ length: 'mm', stress: 'MPa' }, ['output', 'units']);
+    expect(units.names.length).toBe('mm');
+    expect(units.names.force).toBe('N');
+    expect(present(units, 'length', 0.25)).toBeCloseTo(250, 12);
+    expect(present(units, 'stress', 355e6)).toBeCloseTo(355, 9);
+  });
+
+  it('names every bad unit by its pointer', () => {
+    try {
+      resolveOutputUnits({ length: 'kN', force: 'parsec' }, ['output', 'units']);
+      expect.unreachable();
+    } catch (error) {
+      expect(error).toBeInstanceOf(ProblemError);
+      expect((error as ProblemError).errors.map((e) => e.pointer)).toEqual(['/output/units/length', '/output/units/force']);
+    }
+  });
+
+  it('never presents negative zero', () => {
+    expect(Object.is(present(SI_OUTPUT, 'force', -0), 0)).toBe(true);
+  });
+});

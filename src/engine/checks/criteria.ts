@@ -1,0 +1,136 @@
+/**
+ * Acceptance criteria: the safety factor each check must reach and the serviceability limits, with the
+ * defaults that stand in when a request gives none. Every default is common practice, not taken from a
+ * code; the governing local code replaces them in a real design.
+ */
+
+import { DISTORTION_ENERGY_SHEAR_RATIO, type Material } from '../materials/material.js';
+import { FAILURE_MODES, type FailureMode } from './failure-mode.js';
+
+/** A required safety factor is set per failure mode, or with 'ultimate' for checks against an ultimate strength. */
+export type SafetyFactorKey = FailureMode | 'ultimate';
+
+export interface CriteriaInput {
+  /**
+   * One number for every strength and stability check (deflection and twist keep their own factor), or
+   * factors by mode. 'ultimate' applies to the checks made against an ultimate strength: tension-ultimate
+   * and, for a brittle material, every strength check whose mode is not given explicitly.
+   */
+  readonly requiredSafetyFactor?: number | Partial<Record<SafetyFactorKey, number>>;
+  /** Span / allowed deflection for spans between supports (dimensionless, e.g. 250 for L/250). */
+  readonly deflectionLimitRatio?: number;
+  /** Overhang length / allowed deflection for cantilevers and overhangs (dimensionless). */
+  readonly cantileverDeflectionLimitRatio?: number;
+  /** Largest allowed angle of twist anywhere along the member, rad. */
+  readonly allowedTwist?: number;
+  /** Shear yield strength / tensile yield strength for ductile materials; overrides the material's. */
+  readonly shearYieldRatio?: number;
+}
+
+/** The criteria actually used, every value filled in. */
+export interface ResolvedCriteria {
+  readonly requiredSafetyFactor: Readonly<Record<SafetyFactorKey, number>>;
+  readonly deflectionLimitRatio: number;
+  readonly cantileverDeflectionLimitRatio: number;
+  /** rad */
+  readonly allowedTwist: number;
+  readonly shearYieldRatio: number;
+  /** The criteria taken from the defaults rather than from the request. */
+  readonly defaulted: readonly (keyof CriteriaInput)[];
+}
+
+/** Common practice: 1.5 against yield, 2.0 against ultimate, 2.5 against instability, 1.0 for serviceability. */
+const DEFAULT_REQUIRED_SAFETY_FACTOR: Readonly<Record<SafetyFactorKey, number>> = {
+  tension: 1.5,
+  'tension-ultimate': 2.0,
+  compression: 1.5,
+  bending: 1.5,
+  shear: 1.5,
+  torsion: 1.5,
+  buckling: 2.5,
+  'lateral-torsional-buckling': 2.5,
+  combined: 1.5,
+  'beam-column': 1.5,
+  'eccentric-column': 2.5,
+  deflection: 1.0,
+  twist: 1.0,
+  'pin-shear': 1.5,
+  'pin-bearing': 1.5,
+  ultimate: 2.0,
+};
+
+export const DEFAULT_CRITERIA = {
+  requiredSafetyFactor: DEFAULT_REQUIRED_SAFETY_FACTOR,
+  /** Common practice: L/250 for the total deflection of a span (floors often use L/360 for imposed load). */
+  deflectionLimitRatio: 250,
+  /** Common practice: L/180 for a cantilever or overhang. */
+  cantileverDeflectionLimitRatio: 180,
+  /** Common practice: 1 degree of twist. */
+  allowedTwist: Math.PI / 180,
+  /** Distortion-energy theory, Shigley 10th ed., eq. 5-21. */
+  shearYieldRatio: DISTORTION_ENERGY_SHEAR_RATIO,
+} as const;
+
+/** Serviceability limits are compared directly: a single-number factor does not apply to them. */
+const SERVICEABILITY_MODES: readonly FailureMode[] = ['deflection', 'twist'];
+
+/** For a brittle material these checks are made against an ultimate strength. */
+export const STRENGTH_MODES_AGAINST_ULTIMATE_WHEN_BRITTLE: readonly FailureMode[] = [
+  'tension',
+  'compression',
+  'bending',
+  'shear',
+  'torsion',
+  'combined',
+  'beam-column',
+];
+
+/**
+ * Fills the defaults. The material decides two things: its shear yield ratio stands in when the request
+ * gives none, and a brittle material's strength checks take the 'ultimate' factor unless the request
+ * names their mode.
+ */
+export function resolveCriteria(
+  partial: CriteriaInput = {},
+  material: Pick<Material, 'behaviour' | 'shearYieldRatio'> = {
+    behaviour: 'ductile',
+    shearYieldRatio: DEFAULT_CRITERIA.shearYieldRatio,
+  },
+): ResolvedCriteria {
+  const defaulted: (keyof CriteriaInput)[] = [];
+  const given = partial.requiredSafetyFactor;
+  if (given === undefined) defaulted.push('requiredSafetyFactor');
+  const required = {} as Record<SafetyFactorKey, number>;
+  if (typeof given === 'number') {
+    for (const key of [...FAILURE_MODES, 'ultimate'] as const) {
+      required[key] = SERVICEABILITY_MODES.includes(key as FailureMode)
+        ? DEFAULT_REQUIRED_SAFETY_FACTOR[key]
+        : given;
+    }
+  } else {
+    const byMode = given ?? {};
+    required.ultimate = byMode.ultimate ?? DEFAULT_REQUIRED_SAFETY_FACTOR.ultimate;
+    for (const mode of FAILURE_MODES) {
+      const againstUltimate =
+        material.behaviour === 'brittle' && STRENGTH_MODES_AGAINST_ULTIMATE_WHEN_BRITTLE.includes(mode);
+      required[mode] = byMode[mode] ?? (againstUltimate ? required.ultimate : DEFAULT_REQUIRED_SAFETY_FACTOR[mode]);
+    }
+  }
+  const pick = <K extends 'deflectionLimitRatio' | 'cantileverDeflectionLimitRatio' | 'allowedTwist'>(key: K) => {
+    const value = partial[key];
+    if (value !== undefined) return value;
+    defaulted.push(key);
+    return DEFAULT_CRITERIA[key];
+  };
+  const deflectionLimitRatio = pick('deflectionLimitRatio');
+  const cantileverDeflectionLimitRatio = pick('cantileverDeflectionLimitRatio');
+  const allowedTwist = pick('allowedTwist');
+  return {
+    requiredSafetyFactor: required,
+    deflectionLimitRatio,
+    cantileverDeflectionLimitRatio,
+    allowedTwist,
+    shearYieldRatio: partial.shearYieldRatio ?? material.shearYieldRatio,
+    defaulted,
+  };
+}

@@ -1,0 +1,124 @@
+/**
+ * Effective-length factors K of a column, from the request or from the supports of the model.
+ *
+ * Tabulated K for the idealised ends (AISC 360-16 Commentary Table C-A-7.1, values from memory):
+ *   theoretical 0.5 fixed-fixed, 0.7 fixed-pinned, 1.0 pinned-pinned, 2.0 fixed-free;
+ *   recommended design values 0.65, 0.80, 1.0, 2.1 (ends are never perfectly fixed).
+ */
+
+import type { Direction, MemberModel, Restraint, SupportModel } from '../member/model.js';
+import type { BucklingInput, EndConditions } from './check-input.js';
+
+export const THEORETICAL_EFFECTIVE_LENGTH_FACTORS: Readonly<Record<EndConditions, number>> = {
+  'fixed-fixed': 0.5,
+  'fixed-pinned': 0.7,
+  'pinned-pinned': 1.0,
+  'fixed-free': 2.0,
+};
+
+export const RECOMMENDED_EFFECTIVE_LENGTH_FACTORS: Readonly<Record<EndConditions, number>> = {
+  'fixed-fixed': 0.65,
+  'fixed-pinned': 0.8,
+  'pinned-pinned': 1.0,
+  'fixed-free': 2.1,
+};
+
+export function effectiveLengthFactorFor(endConditions: EndConditions, recommendedDesignValues = false): number {
+  return (recommendedDesignValues ? RECOMMENDED_EFFECTIVE_LENGTH_FACTORS : THEORETICAL_EFFECTIVE_LENGTH_FACTORS)[
+    endConditions
+  ];
+}
+
+/** The plane a column buckles in: about z it deflects along y (uy, rz); about y along z (uz, ry). */
+export type BucklingPlane = 'y' | 'z';
+
+const PLANE_DIRECTIONS: Readonly<Record<BucklingPlane, { translation: Direction; rotation: Direction }>> = {
+  z: { translation: 'uy', rotation: 'rz' },
+  y: { translation: 'uz', rotation: 'ry' },
+};
+
+export interface EffectiveLengthFactor {
+  readonly factor: number;
+  /** How it was chosen, for a notice. */
+  readonly basis: string;
+}
+
+type EndRestraint = 'fixed' | 'pinned' | 'free';
+
+const isRigid = (restraint: Restraint | undefined) => restraint === 'rigid';
+
+/**
+ * A spring counts as free in translation and as a pin in rotation: both err on the safe side.
+ * Several supports at one position act together.
+ */
+function endRestraint(supports: readonly SupportModel[], plane: BucklingPlane): EndRestraint {
+  const { translation, rotation } = PLANE_DIRECTIONS[plane];
+  if (!supports.some((support) => isRigid(support.restraints[translation]))) return 'free';
+  return supports.some((support) => isRigid(support.restraints[rotation])) ? 'fixed' : 'pinned';
+}
+
+/**
+ * K from the supports, over the member length:
+ * - supports at the two ends only: the idealised end conditions they form;
+ * - supports in between and both ends held laterally: K = 1 (bracing in between only shortens the
+ *   buckled length, so this is conservative);
+ * - a free (overhanging) end with supports in between: K = 2, a fixed-free column of the whole length
+ *   (conservative; give unbracedLength and a factor to refine).
+ */
+export function effectiveLengthFactorFromSupports(
+  model: MemberModel,
+  plane: BucklingPlane,
+  recommendedDesignValues = false,
+): EffectiveLengthFactor {
+  const tolerance = 1e-9 * model.length;
+  const { translation } = PLANE_DIRECTIONS[plane];
+  const atStart = model.supports.filter((support) => support.position <= tolerance);
+  const atEnd = model.supports.filter((support) => support.position >= model.length - tolerance);
+  const between = model.supports.filter(
+    (support) =>
+      support.position > tolerance && support.position < model.length - tolerance && isRigid(support.restraints[translation]),
+  );
+  const ends = [endRestraint(atStart, plane), endRestraint(atEnd, plane)].sort() as EndRestraint[];
+  if (between.length > 0) {
+    return ends.includes('free')
+      ? { factor: 2.0, basis: 'an overhanging free end beyond intermediate supports: K = 2 over the member length (conservative)' }
+      : { factor: 1.0, basis: 'intermediate lateral supports: K = 1 over the member length (conservative)' };
+  }
+  const [first, second] = ends as [EndRestraint, EndRestraint];
+  const endConditions = ENDS_TO_CONDITIONS[`${first}-${second}`];
+  if (endConditions === undefined) {
+    return { factor: 2.0, basis: `ends ${first} and ${second} give no idealised column: K = 2 assumed` };
+  }
+  return {
+    factor: effectiveLengthFactorFor(endConditions, recommendedDesignValues),
+    basis: `${endConditions} ends read from the supports`,
+  };
+}
+
+/** Sorted pairs of end restraints to the idealised end conditions. */
+const ENDS_TO_CONDITIONS: Readonly<Record<string, EndConditions | undefined>> = {
+  'fixed-fixed': 'fixed-fixed',
+  'fixed-pinned': 'fixed-pinned',
+  'pinned-pinned': 'pinned-pinned',
+  'fixed-free': 'fixed-free',
+};
+
+/** K for one plane: the per-axis factor, else the common factor, else the end conditions, else the supports. */
+export function resolveEffectiveLengthFactor(
+  buckling: BucklingInput,
+  model: MemberModel,
+  plane: BucklingPlane,
+): EffectiveLengthFactor {
+  const perAxis = plane === 'y' ? buckling.effectiveLengthFactorY : buckling.effectiveLengthFactorZ;
+  if (perAxis !== undefined) return { factor: perAxis, basis: `effectiveLengthFactor${plane.toUpperCase()} as given` };
+  if (buckling.effectiveLengthFactor !== undefined) {
+    return { factor: buckling.effectiveLengthFactor, basis: 'effectiveLengthFactor as given' };
+  }
+  if (buckling.endConditions !== undefined) {
+    return {
+      factor: effectiveLengthFactorFor(buckling.endConditions, buckling.recommendedDesignValues),
+      basis: `${buckling.endConditions} ends as given`,
+    };
+  }
+  return effectiveLengthFactorFromSupports(model, plane, buckling.recommendedDesignValues);
+}

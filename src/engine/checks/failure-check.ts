@@ -1,0 +1,43 @@
+/** Builds a FailureCheck from its demand and capacity, keeping every number finite. */
+
+import { EngineError } from '../engine-error.js';
+import type { CheckQuantity, FailureCheck } from './check-outcome.js';
+import type { FailureMode } from './failure-mode.js';
+
+export interface FailureCheckSpec {
+  readonly mode: FailureMode;
+  readonly quantity: CheckQuantity;
+  readonly demand: number;
+  readonly capacity: number;
+  readonly requiredSafetyFactor: number;
+  readonly position: number | null;
+  readonly location: string | null;
+  readonly basis: string;
+}
+
+/**
+ * safetyFactor = capacity / demand and utilization = demand * required / capacity; a zero demand gives
+ * utilization 0, a null safety factor and no position or location, never a division by zero.
+ */
+export function failureCheck(spec: FailureCheckSpec): FailureCheck {
+  const { mode, capacity, requiredSafetyFactor } = spec;
+  if (!(capacity > 0) || !Number.isFinite(capacity)) {
+    throw new EngineError('not-applicable', `The ${mode} check has no positive, finite capacity (${capacity}).`, [], {
+      mode,
+      capacity,
+    });
+  }
+  if (!Number.isFinite(spec.demand) || !(requiredSafetyFactor > 0) || !Number.isFinite(requiredSafetyFactor)) {
+    throw new EngineError('not-applicable', `The ${mode} check has no finite demand or required safety factor.`, [], {
+      mode,
+      demand: spec.demand,
+      requiredSafetyFactor,
+    });
+  }
+  const demand = Math.max(0, spec.demand);
+  if (demand === 0) {
+    return { ...spec, demand, safetyFactor: null, utilization: 0, passes: true, position: null, location: null };
+  }
+  const utilization = (demand * requiredSafetyFactor) / capacity;
+  return { ...spec, demand, safetyFactor: capacity / demand, utilization, passes: utilization <= 1 };
+}

@@ -1,0 +1,77 @@
+/** The plain-words notices that go with every check outcome: what the checks assume and leave out. */
+
+import type { CheckContext } from './check-context.js';
+import type { FailureCheck } from './check-outcome.js';
+import { largestMagnitudeOn } from './critical-positions.js';
+import { columnAxes, eulerLoad } from './column-buckling.js';
+import { productMomentOf, transverseShearPerForce } from './section-stresses.js';
+
+export const CAUTION_NOTICE =
+  'Screening calculation, not a design-code check: verify the design to the governing local code with a licensed engineer.';
+export const EXCLUSIONS_NOTICE =
+  'Stress concentrations, fatigue, and connections other than the declared pins are not included.';
+export const COLUMN_NOTICE =
+  'The column formulas assume a straight, concentrically loaded column equivalent to a pin-ended one of length K L.';
+export const LOCAL_BUCKLING_NOTICE = 'Local buckling of thin walls, flanges and webs is not checked.';
+export const BRITTLE_NOTICE =
+  'Brittle material: the strength checks use the ultimate strengths (no yield), and modified Mohr for combined stresses.';
+export const ELEMENTARY_SHEAR_NOTICE = 'The transverse shear stress V Q / (I b) is the elementary beam-theory value.';
+export const AVERAGE_SHEAR_NOTICE =
+  'The section gives no first moment of area for shear: the transverse shear stress is the average V / A, which understates the peak.';
+export const UNSYMMETRIC_NOTICE =
+  'The principal axes are not y and z (product moment Iyz is not zero): stresses use the unsymmetric-bending formula, and the deflections treat bending about y and z as uncoupled.';
+export const BIAXIAL_SHEAR_NOTICE =
+  'Shear acts along both y and z: the larger direction is checked; on a solid section the two can meet at the centroid, where their resultant can reach up to sqrt(2) times the larger.';
+export const LATERAL_TORSIONAL_NOTICE =
+  'Lateral-torsional buckling is checked elastically (the inelastic range is not covered); a support that holds the member laterally is taken as a fork that also prevents twist.';
+export const AMPLIFICATION_NOTICE =
+  'The beam-column check takes the largest compressive force and the largest moments together, wherever they occur.';
+
+export const NO_DEMAND_NOTICE = 'No load effect anywhere on the member: every utilization is zero.';
+
+const THIN_WALLED_SHAPES = new Set(['i-section', 'channel', 'tee', 'angle', 'box', 'tube']);
+/** Non-circular sections whose two transverse shear peaks can meet at one point. */
+const SOLID_SHAPES = new Set(['rectangle', 'custom']);
+
+export function defaultsNotice(defaulted: readonly string[]): string {
+  return `Default criteria (common practice) stand in for the governing code: ${defaulted.join(', ')}.`;
+}
+
+export function memberNotices(context: CheckContext, checks: readonly FailureCheck[]): string[] {
+  const { input, criteria, peaks } = context;
+  const { section } = input;
+  const checked = (mode: FailureCheck['mode']) => checks.some((check) => check.mode === mode);
+  const notices = [CAUTION_NOTICE, EXCLUSIONS_NOTICE];
+  if (criteria.defaulted.length > 0) notices.push(defaultsNotice(criteria.defaulted));
+  if (input.material.behaviour === 'brittle') notices.push(BRITTLE_NOTICE);
+  if (THIN_WALLED_SHAPES.has(section.shape)) notices.push(LOCAL_BUCKLING_NOTICE);
+  if (productMomentOf(section) !== 0) notices.push(UNSYMMETRIC_NOTICE);
+  if (peaks.transverseShear.value > 0) {
+    notices.push(transverseShearPerForce(section).elementary ? ELEMENTARY_SHEAR_NOTICE : AVERAGE_SHEAR_NOTICE);
+  }
+  if (SOLID_SHAPES.has(section.shape) && hasShearInBothDirections(context)) notices.push(BIAXIAL_SHEAR_NOTICE);
+  if (checked('buckling')) {
+    notices.push(COLUMN_NOTICE);
+    const force = peaks.axialCompression.value * section.area;
+    for (const axis of columnAxes(context)) {
+      notices.push(`Effective-length factor about the ${axis.axis} axis: K = ${axis.effectiveLengthFactor.factor}, ${axis.effectiveLengthFactor.basis}.`);
+      if (force >= eulerLoad(context, axis)) {
+        notices.push(`The compressive force reaches the Euler load about the ${axis.axis} axis: the member buckles.`);
+      }
+    }
+  }
+  if (checked('lateral-torsional-buckling')) notices.push(LATERAL_TORSIONAL_NOTICE);
+  if (checked('beam-column')) notices.push(AMPLIFICATION_NOTICE);
+  if (checks.every((check) => check.utilization === 0)) {
+    notices.push(NO_DEMAND_NOTICE);
+  }
+  return notices;
+}
+
+function hasShearInBothDirections(context: CheckContext): boolean {
+  const { analysis } = context.input;
+  return (
+    largestMagnitudeOn(analysis, 'shearY', 0, analysis.length).value > 0 &&
+    largestMagnitudeOn(analysis, 'shearZ', 0, analysis.length).value > 0
+  );
+}

@@ -83,8 +83,15 @@ export interface CustomDimensions {
   readonly plasticModulusZ?: number;
   readonly plasticModulusY?: number;
   readonly warpingConstant?: number;
+  /** Area that carries shear along y at its peak: tau max = Vy / shearAreaY, m^2. */
   readonly shearAreaY?: number;
   readonly shearAreaZ?: number;
+  /** Torsional section modulus Wt = T / tau max, m^3 (tabulated for hollow sections). */
+  readonly torsionalModulus?: number;
+  /** The thickest plate of the section, m, for the yield strength's thickness band. */
+  readonly thickestElement?: number;
+  /** True for a closed (hollow or solid) section that does not buckle laterally-torsionally. */
+  readonly closed?: boolean;
 }
 
 export type SectionDimensions =

@@ -63,8 +63,11 @@ export interface SectionProperties {
   /** Largest torsional shear stress per unit torque, Pa / (N*m) = 1/m^3. */
   readonly torsionalShearPerTorque: number;
   /**
-   * For transverse shear along y (bending about z): first moment of area Q about the z axis of the
-   * part above the neutral axis, m^3, and the width b cut there, m. Largest tau = Vy Q / (Iz b).
+   * For transverse shear along y (bending about z): the first moment of area Q, m^3, about the
+   * centroidal z axis of the part cut off by the line where Vy Q / (Iz b) peaks, and the width b cut
+   * there, m. Largest tau = Vy Q / (Iz b). The cut is the neutral axis for most shapes; where the
+   * width narrows away from it (a tee whose neutral axis lies in the flange, the fillet toes of an
+   * angle) it is the cut with the largest Q / b.
    */
   readonly shearFirstMomentY: number;
   readonly shearWidthY: number;
@@ -84,4 +87,48 @@ export interface SectionProperties {
   readonly stressPoints: readonly StressPoint[];
   /** The thickest plate element, m: it picks the yield strength's thickness band. */
   readonly thickestElement: number;
+  /**
+   * Which values describe the section itself. Every shape computed from its dimensions knows them
+   * all; a 'custom' section may leave some unknown, and then the value beside it is only the stand-in
+   * named in KnownSectionProperties. Absent means all known.
+   */
+  readonly known?: KnownSectionProperties;
+}
+
+/**
+ * For each group of values, true when it comes from the geometry or was given, false when it is a
+ * stand-in (documented per field) that a check must not rely on or must report as an assumption.
+ */
+export interface KnownSectionProperties {
+  /**
+   * Fibre distances along y, sectionModulusZ and the stress points' y: false when neither depth nor
+   * sectionModulusZ was given; the stand-in fibre distance is the radius of gyration, the smallest
+   * any section can have, so the stand-in modulus is an upper bound (unconservative).
+   */
+  readonly bendingStressZ: boolean;
+  /** The same for z, sectionModulusY and width. */
+  readonly bendingStressY: boolean;
+  /** False when the plastic modulus is the elastic one standing in (a lower bound, conservative). */
+  readonly plasticModulusZ: boolean;
+  readonly plasticModulusY: boolean;
+  /**
+   * False when no shear area was given: Q / b stand for a solid rectangle (tau = 1.5 V / A), which
+   * underestimates the peak in a thin web.
+   */
+  readonly shearStressY: boolean;
+  readonly shearStressZ: boolean;
+  /**
+   * False when no torsional modulus was given: the stand-in is T R / J with R the half diagonal of
+   * the fibre distances, which bounds circles, rectangles and thin-walled sections from above.
+   */
+  readonly torsionalShearStress: boolean;
+  /** False when no warping constant was given: the stand-in 0 is conservative for lateral buckling. */
+  readonly warpingConstant: boolean;
+  /**
+   * False when not given: the stand-in is the smaller of depth and width (no plate is thicker than
+   * the box it fits in), else the square root of the area; conservative for the thickness bands.
+   */
+  readonly thickestElement: boolean;
+  /** False for custom sections: the given axes are taken as principal (product moment 0). */
+  readonly productMoment: boolean;
 }

@@ -13,7 +13,7 @@ import type { RouteContract } from './api/route-contract.js';
 import { docsRoutes } from './api/routes/docs.js';
 import { healthContracts, healthRoutes } from './api/routes/health.js';
 import { memberCheckContract, memberCheckRoutes } from './api/routes/member-checks.js';
-import { loadCatalogues, type LoadedCatalogues } from './catalogues/load-catalogues.js';
+import { loadCatalogues, type LoadedCatalogues } from './api/load-catalogues.js';
 
 export interface AppOptions {
   /** Catalogues already loaded (tests); otherwise the embedded ones plus `companyCataloguePath`. */
@@ -50,6 +50,8 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   app.addHook('onRequest', async (request, reply) => {
     reply.header('x-request-id', request.id);
   });
+  // JSON only: without this Fastify would also take text/plain bodies.
+  app.removeContentTypeParser('text/plain');
   registerErrorHandler(app);
 
   const routes = new RouteTable();
@@ -71,7 +73,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   await app.register(
     healthRoutes(() => ({
       status: ready ? 'ready' : 'loading',
-      catalogues: catalogues.sources,
+      catalogues: [...catalogues.sources],
       sectionFamilies: catalogues.sectionFamilies,
     })),
   );

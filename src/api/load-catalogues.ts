@@ -6,11 +6,11 @@
 
 import { readdir, readFile, stat } from 'node:fs/promises';
 import { join } from 'node:path';
-import { embeddedMaterials } from '../catalogues/embedded-materials.js';
-import { EMBEDDED_SECTIONS_NAME, embeddedSections } from '../catalogues/embedded-sections.js';
+import { embeddedMaterialCatalogue } from '../catalogues/embedded-materials.js';
+import { embeddedSectionCatalogue } from '../catalogues/embedded-sections.js';
 import type { MaterialEntry } from '../catalogues/material-entry.js';
 import { MaterialCatalogue } from '../catalogues/material-catalogue.js';
-import { SectionCatalogue } from '../catalogues/section-catalogue.js';
+import type { SectionCatalogue } from '../catalogues/section-catalogue.js';
 import type { SectionEntry } from '../catalogues/section-entry.js';
 import type { Catalogues } from './member-check.js';
 import { resolveMaterial } from './normalise/material.js';
@@ -37,11 +37,9 @@ export class CatalogueFileError extends Error {
   override readonly name = 'CatalogueFileError';
 }
 
-const EMBEDDED_MATERIALS_NAME = 'the embedded material catalogues';
-
 export async function loadCatalogues(options: { companyPath?: string | undefined }): Promise<LoadedCatalogues> {
-  const sections = new SectionCatalogue([{ name: EMBEDDED_SECTIONS_NAME, entries: embeddedSections() }]);
-  const materials = new MaterialCatalogue([{ name: EMBEDDED_MATERIALS_NAME, entries: embeddedMaterials() }]);
+  const sections = embeddedSectionCatalogue();
+  const materials = embeddedMaterialCatalogue();
   const sources: CatalogueSourceSummary[] = [{ name: 'embedded', sections: sections.size, materials: materials.size }];
   for (const file of options.companyPath ? await companyFiles(options.companyPath) : []) {
     const company = await readCompanyFile(file);

@@ -53,8 +53,16 @@ const hinge = z
 export const memberInput = z
   .strictObject({
     length: quantity('length', 'Length of the member; x runs from 0 to length.'),
-    supports: z.array(supportInput).min(1).max(MAX_SUPPORTS),
-    hinges: z.array(hinge).max(MAX_HINGES).optional(),
+    supports: z
+      .array(supportInput)
+      .min(1)
+      .max(MAX_SUPPORTS)
+      .openapi({ description: `The supports, anywhere in [0, length]; 1 to ${MAX_SUPPORTS}. Their reactions come back in this order.` }),
+    hinges: z
+      .array(hinge)
+      .max(MAX_HINGES)
+      .optional()
+      .openapi({ description: 'Internal hinges (moment releases), anywhere in (0, length).' }),
   })
   .openapi('Member', {
     description: 'A straight prismatic member. Axes: x along the member from its start, y up (gravity is -y), z horizontal, right-handed.',

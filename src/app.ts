@@ -12,7 +12,10 @@ import { ProblemError } from './api/problems.js';
 import type { RouteContract } from './api/route-contract.js';
 import { docsRoutes } from './api/routes/docs.js';
 import { healthContracts, healthRoutes } from './api/routes/health.js';
+import { materialContracts, materialRoutes } from './api/routes/materials.js';
 import { memberCheckContract, memberCheckRoutes } from './api/routes/member-checks.js';
+import { sectionPropertiesContract, sectionPropertiesRoutes } from './api/routes/section-properties.js';
+import { sectionContracts, sectionRoutes } from './api/routes/sections.js';
 import { loadCatalogues, type LoadedCatalogues } from './api/load-catalogues.js';
 
 export interface AppOptions {
@@ -29,7 +32,7 @@ export const DEFAULT_BODY_LIMIT = 1024 * 1024;
 
 /** The route contracts, in the order the document lists them. */
 export function routeContracts(): RouteContract[] {
-  return [memberCheckContract, ...healthContracts];
+  return [memberCheckContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts];
 }
 
 const REQUEST_ID = /^[\w.:-]{1,128}$/;
@@ -78,6 +81,9 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     })),
   );
   await app.register(memberCheckRoutes(catalogues));
+  await app.register(sectionPropertiesRoutes(catalogues));
+  await app.register(sectionRoutes(catalogues));
+  await app.register(materialRoutes(catalogues));
   await app.ready();
   ready = true;
   return app;

@@ -56,7 +56,9 @@ describe('the OpenAPI document', () => {
       for (const [name, property] of Object.entries((node.properties ?? {}) as Record<string, Record<string, unknown>>)) {
         // Discriminators and labels explain themselves through their enum values and names.
         const selfExplaining = ['type', 'shape', 'label', 'name'].includes(name);
-        if (!selfExplaining && typeof property.description !== 'string' && typeof property.$ref !== 'string') missing.push(`${where}.${name}`);
+        const parts = [property, ...((property.allOf as Record<string, unknown>[] | undefined) ?? [])];
+        const described = parts.some((part) => typeof part.description === 'string' || typeof part.$ref === 'string');
+        if (!selfExplaining && !described) missing.push(`${where}.${name}`);
         visit(property, `${where}.${name}`);
       }
       for (const key of ['items', 'anyOf', 'oneOf', 'allOf', 'prefixItems', 'additionalProperties']) {

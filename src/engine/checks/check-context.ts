@@ -2,9 +2,10 @@
 
 import type { MemberCheckInput } from './check-input.js';
 import type { FailureCheck, NotApplicableCheck, StressSummary } from './check-outcome.js';
-import type { ResolvedCriteria } from './criteria.js';
-import type { MemberScan } from './critical-positions.js';
-import type { MaterialStrengths } from './strengths.js';
+import { resolveCriteria, type ResolvedCriteria } from './criteria.js';
+import { scanMember, type MemberScan } from './critical-positions.js';
+import { materialStrengths, type MaterialStrengths } from './strengths.js';
+import { stressPeaks } from './stress-peaks.js';
 
 export interface CheckContext {
   readonly input: MemberCheckInput;
@@ -18,4 +19,17 @@ export interface CheckContext {
 export interface CheckFindings {
   readonly checks: readonly FailureCheck[];
   readonly notApplicable: readonly NotApplicableCheck[];
+}
+
+/** Resolves the criteria, finds the critical positions and the stress peaks. */
+export function buildCheckContext(input: MemberCheckInput): CheckContext {
+  const criteria = resolveCriteria(input.criteria, input.material);
+  const scan = scanMember(input.analysis, input.section);
+  return {
+    input,
+    scan,
+    peaks: stressPeaks(input, scan),
+    criteria,
+    strengths: materialStrengths(input.material, criteria.shearYieldRatio),
+  };
 }

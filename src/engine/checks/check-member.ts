@@ -12,21 +12,17 @@ import type { SectionProperties } from '../sections/section-properties.js';
 import { axialChecks } from './axial.js';
 import { beamColumnChecks } from './beam-column.js';
 import { bendingChecks } from './bending.js';
-import type { CheckContext, CheckFindings } from './check-context.js';
+import { buildCheckContext, type CheckFindings } from './check-context.js';
 import type { MemberCheckInput } from './check-input.js';
 import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck } from './check-outcome.js';
 import { columnBuckling } from './column-buckling.js';
 import { combinedChecks } from './combined.js';
-import { scanMember } from './critical-positions.js';
-import { resolveCriteria } from './criteria.js';
 import { deflectionChecks } from './deflection.js';
 import { governingFailure } from './governing.js';
 import { lateralTorsionalChecks } from './lateral-torsional-buckling.js';
 import { memberNotices } from './notices.js';
 import { pinChecks } from './pins.js';
 import { shearChecks } from './shear.js';
-import { materialStrengths } from './strengths.js';
-import { stressPeaks } from './stress-peaks.js';
 import { torsionChecks } from './torsion.js';
 import { twistChecks } from './twist.js';
 
@@ -54,15 +50,7 @@ function assertUsableSection(section: SectionProperties): void {
 
 export function checkMember(input: MemberCheckInput): MemberCheckOutcome {
   assertUsableSection(input.section);
-  const criteria = resolveCriteria(input.criteria, input.material);
-  const scan = scanMember(input.analysis, input.section);
-  const context: CheckContext = {
-    input,
-    scan,
-    peaks: stressPeaks(input, scan),
-    criteria,
-    strengths: materialStrengths(input.material, criteria.shearYieldRatio),
-  };
+  const context = buildCheckContext(input);
   const buckling = columnBuckling(context, context.peaks.axialCompression);
   const lateralTorsional = lateralTorsionalChecks(context);
   const findings: CheckFindings[] = [
@@ -88,7 +76,7 @@ export function checkMember(input: MemberCheckInput): MemberCheckOutcome {
     buckling: buckling.summary,
     lateralTorsionalBuckling: lateralTorsional.summary,
     stresses: context.peaks,
-    criteria,
+    criteria: context.criteria,
     notices: memberNotices(context, checks),
   };
 }

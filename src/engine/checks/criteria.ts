@@ -112,7 +112,8 @@ export function resolveCriteria(
     required.ultimate = byMode.ultimate ?? DEFAULT_REQUIRED_SAFETY_FACTOR.ultimate;
     for (const mode of FAILURE_MODES) {
       const againstUltimate =
-        material.behaviour === 'brittle' && STRENGTH_MODES_AGAINST_ULTIMATE_WHEN_BRITTLE.includes(mode);
+        mode === 'tension-ultimate' ||
+        (material.behaviour === 'brittle' && STRENGTH_MODES_AGAINST_ULTIMATE_WHEN_BRITTLE.includes(mode));
       required[mode] = byMode[mode] ?? (againstUltimate ? required.ultimate : DEFAULT_REQUIRED_SAFETY_FACTOR[mode]);
     }
   }

@@ -1,0 +1,102 @@
+import { describe, expect, it } from 'vitest';
+import {
+  elasticCriticalMoment,
+  lateralTorsionalChecks,
+  lateralTorsionalExclusion,
+} from '../../../src/engine/checks/lateral-torsional-buckling.js';
+import { cantileverTipLoad, FIXED, PIN, ROLLER, simpleSpanUniformLoad, support, uniformMoment } from './fixtures/analyses.js';
+import { contextOf, relativeError } from './fixtures/inputs.js';
+import { steel } from './fixtures/materials.js';
+import { iSection, rectangle, round, tee } from './fixtures/sections.js';
+
+// 200 x 100 x 5.6 x 8.5 welded I (no fillets): Iy = (2 * 0.0085 * 0.1^3 + 0.183 * 0.0056^3) / 12 = 1.41934e-6 m^4,
+// J = (2 * 0.1 * 0.0085^3 + 0.1915 * 0.0056^3) / 3 = 5.2152e-8 m^4, Iw = 0.0085 * 0.1^3 * 0.1915^2 / 24 = 1.29881e-8 m^6.
+const section = iSection(0.2, 0.1, 0.0056, 0.0085);
+
+describe('elasticCriticalMoment', () => {
+  it('matches the Timoshenko & Gere closed form for a simply supported I-beam in uniform moment (C1 = 1)', () => {
+    // L = 4 m: E Iy = 298061, G J = 4224.3, (pi / 4) sqrt(1.25911e9) = 27869; pi^2 E Iw / (G J L^2) = 26919 / 67589
+    // = 0.39828; M_cr = 27869 * sqrt(1.39828) = 32955 N*m (Theory of Elastic Stability, 2nd ed., ch. 6, from memory).
+    expect(section.secondMomentY).toBeCloseTo(1.41934e-6, 10);
+    expect(section.torsionConstant).toBeCloseTo(5.2152e-8, 11);
+    expect(section.warpingConstant).toBeCloseTo(1.29881e-8, 12);
+    const moment = elasticCriticalMoment({
+      elasticModulus: steel.elasticModulus,
+      shearModulus: steel.shearModulus,
+      secondMomentY: section.secondMomentY,
+      torsionConstant: section.torsionConstant,
+      warpingConstant: section.warpingConstant,
+      effectiveLength: 4,
+      momentGradientFactor: 1,
+    });
+    expect(relativeError(moment, 32955)).toBeLessThan(1e-3);
+  });
+
+  it('reduces to (pi / L) sqrt(E Iy G J) for a narrow rectangle (no warping) and scales with C1', () => {
+    const base = { elasticModulus: 200e9, shearModulus: 80e9, secondMomentY: 1e-7, torsionConstant: 4e-7, warpingConstant: 0, effectiveLength: 2 };
+    const expected = (Math.PI / 2) * Math.sqrt(200e9 * 1e-7 * 80e9 * 4e-7);
+    expect(elasticCriticalMoment({ ...base, momentGradientFactor: 1 })).toBeCloseTo(expected, 6);
+    expect(elasticCriticalMoment({ ...base, momentGradientFactor: 1.75 })).toBeCloseTo(1.75 * expected, 6);
+  });
+});
+
+describe('lateralTorsionalExclusion', () => {
+  it('applies to I-sections, channels and rectangles at least twice as deep as wide', () => {
+    expect(lateralTorsionalExclusion(section)).toBeNull();
+    expect(lateralTorsionalExclusion({ ...section, shape: 'channel' })).toBeNull();
+    expect(lateralTorsionalExclusion(rectangle(0.05, 0.1))).toBeNull();
+    expect(lateralTorsionalExclusion(rectangle(0.06, 0.1))).toContain('common practice');
+    expect(lateralTorsionalExclusion(round(0.05))).toContain('closed section');
+    expect(lateralTorsionalExclusion(tee())).toContain('not covered');
+    expect(lateralTorsionalExclusion(rectangle(0.2, 0.1))).toContain('not the strong axis');
+  });
+});
+
+describe('lateralTorsionalChecks', () => {
+  it('checks a simple span with its own Cb: 1.136 under a uniform load', () => {
+    const analysis = simpleSpanUniformLoad(4, 5e3, 1);
+    const context = contextOf({ analysis, section, material: steel });
+    const { summary, findings } = lateralTorsionalChecks(context);
+    expect(summary?.momentGradientFactor).toBeCloseTo(1.13636, 5);
+    expect(summary?.unbracedLength).toBe(4);
+    const [check] = findings.checks;
+    // w L^2 / 8 = 10 kN*m against 1.13636 * 32955 = 37449 N*m.
+    expect(check?.demand).toBeCloseTo(10e3, 6);
+    expect(relativeError(check?.capacity ?? 0, 1.13636 * 32955)).toBeLessThan(1e-3);
+    expect(check?.requiredSafetyFactor).toBe(2.5);
+    expect(check?.position).toBeCloseTo(2, 12);
+  });
+
+  it('takes a cantilever with a fixed root at its own length and Cb = 1', () => {
+    const analysis = cantileverTipLoad(2, 1e3, 1);
+    const { summary } = lateralTorsionalChecks(contextOf({ analysis, section, material: steel, supports: [support(0, FIXED)] }));
+    expect(summary?.effectiveLength).toBe(2);
+    expect(summary?.momentGradientFactor).toBe(1);
+  });
+
+  it('doubles the length of an overhang whose root is only a fork (common practice)', () => {
+    const analysis = cantileverTipLoad(2, 1e3, 1);
+    const { summary } = lateralTorsionalChecks(contextOf({ analysis, section, material: steel, supports: [support(0, [...PIN, 'rz'])] }));
+    expect(summary?.effectiveLength).toBe(4);
+  });
+
+  it('uses a requested unbraced length with Cb = 1 unless one is given', () => {
+    const analysis = uniformMoment(6, 8e3, 1);
+    const supports = [support(0, PIN), support(6, ROLLER)];
+    const given = lateralTorsionalChecks(contextOf({ analysis, section, material: steel, supports, lateralTorsional: { unbracedLength: 2 } }));
+    expect(given.summary?.unbracedLength).toBe(2);
+    expect(given.summary?.momentGradientFactor).toBe(1);
+    const withFactor = lateralTorsionalChecks(
+      contextOf({ analysis, section, material: steel, supports, lateralTorsional: { unbracedLength: 2, momentGradientFactor: 1.3 } }),
+    );
+    expect(withFactor.summary?.momentGradientFactor).toBe(1.3);
+  });
+
+  it('does not apply when braced, or without a strong-axis moment', () => {
+    const braced = lateralTorsionalChecks(contextOf({ analysis: uniformMoment(4, 8e3, 1), section, material: steel, lateralTorsional: { braced: true } }));
+    expect(braced.summary).toBeNull();
+    expect(braced.findings.notApplicable[0]?.reason).toContain('braced');
+    const unloaded = lateralTorsionalChecks(contextOf({ analysis: uniformMoment(4, 0, 1), section, material: steel }));
+    expect(unloaded.findings.notApplicable[0]?.reason).toContain('no strong-axis bending moment');
+  });
+});

@@ -6,19 +6,24 @@
 import { analyseMember } from '../engine/analysis/analyse-member.js';
 import type { MemberAnalysis } from '../engine/analysis/result.js';
 import { sampleDiagrams } from '../engine/analysis/sample-diagrams.js';
-import { SCREENING_CAUTION } from '../engine/caution.js';
+import { checkMember } from '../engine/checks/check-member.js';
+import type { BucklingInput, LateralTorsionalInput, PinInput } from '../engine/checks/check-input.js';
+import type { MemberCheckOutcome } from '../engine/checks/check-outcome.js';
+import type { CriteriaInput } from '../engine/checks/criteria.js';
 import { EngineError } from '../engine/engine-error.js';
 import type { Material } from '../engine/materials/material.js';
 import { selfWeightLoad } from '../engine/member/self-weight.js';
 import { STANDARD_GRAVITY, type LoadModel, type MemberModel } from '../engine/member/model.js';
 import type { SectionProperties } from '../engine/sections/section-properties.js';
 import type { MaterialLookup, SectionLookup } from './normalise/catalogue-lookup.js';
+import { normaliseBuckling, normaliseCriteria, normaliseLateralTorsional, normalisePins } from './normalise/check-options.js';
 import { resolveMaterial, type ResolvedMaterial } from './normalise/material.js';
 import { normaliseLoads, normaliseMember, type NormalisedMember } from './normalise/member.js';
 import { QuantityReader, type Path } from './normalise/quantity-reader.js';
 import { resolveSection, type ResolvedSection } from './normalise/section.js';
 import { resolveOutputUnits, present, type OutputUnits } from './output-units.js';
 import { presentDiagrams, presentEquilibrium, presentExtremes, presentReactions } from './present/analysis.js';
+import { presentChecks } from './present/checks.js';
 import { presentMaterial } from './present/material.js';
 import { presentSection } from './present/section.js';
 import { jsonPointer, ProblemError } from './problems.js';
@@ -41,6 +46,10 @@ export interface NormalisedCheck {
   readonly samples: number;
   readonly units: OutputUnits;
   readonly material: (thickestElement: number) => ResolvedMaterial;
+  readonly criteria: CriteriaInput;
+  readonly buckling: BucklingInput;
+  readonly lateralTorsional: LateralTorsionalInput;
+  readonly pins: readonly PinInput[];
   readonly base: Path;
 }
 
@@ -49,6 +58,10 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
   const member = normaliseMember(request.member, reader, [...base, 'member']);
   const loads = normaliseLoads(request.loads, reader, [...base, 'loads']);
   const material = resolveMaterial(request.material, catalogues.materials, reader, [...base, 'material']);
+  const criteria = normaliseCriteria(request.criteria, reader, [...base, 'criteria']);
+  const buckling = normaliseBuckling(request.buckling, reader, [...base, 'buckling']);
+  const lateralTorsional = normaliseLateralTorsional(request.lateralTorsional, reader, [...base, 'lateralTorsional']);
+  const pins = normalisePins(request.member.supports, catalogues.materials, reader, [...base, 'member', 'supports']);
   const units = resolveOutputUnits(request.output?.units, [...base, 'output', 'units']);
   reader.finish();
   return {
@@ -60,6 +73,10 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
     samples: request.output?.samples ?? DEFAULT_SAMPLES,
     units,
     material,
+    criteria,
+    buckling,
+    lateralTorsional,
+    pins,
     base,
   };
 }
@@ -95,23 +112,44 @@ export function analyseOrProblem(model: MemberModel, base: Path): MemberAnalysis
   }
 }
 
+function checkOrProblem(check: NormalisedCheck, member: Omit<CheckedMember, 'outcome'>): MemberCheckOutcome {
+  try {
+    return checkMember({
+      analysis: member.analysis,
+      model: member.model,
+      section: member.section.properties,
+      material: member.material,
+      criteria: check.criteria,
+      buckling: check.buckling,
+      lateralTorsional: check.lateralTorsional,
+      pins: check.pins,
+    });
+  } catch (error) {
+    if (!(error instanceof EngineError)) throw error;
+    const pointer = jsonPointer([...check.base, ...error.path]);
+    throw new ProblemError('notApplicable', error.message, error.path.length > 0 ? [{ pointer, message: error.message }] : []);
+  }
+}
+
 export interface CheckedMember {
   readonly section: ResolvedSection;
   readonly material: Material;
   readonly model: MemberModel;
   readonly analysis: MemberAnalysis;
+  readonly outcome: MemberCheckOutcome;
 }
 
 export function checkWithSection(check: NormalisedCheck, section: ResolvedSection): CheckedMember {
   const { material } = check.material(section.properties.thickestElement);
   const model = memberModel(check, section.properties, material);
   const analysis = analyseOrProblem(model, check.base);
-  return { section, material, model, analysis };
+  const outcome = checkOrProblem(check, { section, material, model, analysis });
+  return { section, material, model, analysis, outcome };
 }
 
 export function presentCheck(check: NormalisedCheck, checked: CheckedMember): MemberCheckResponse {
   const { units } = check;
-  const { section, material, analysis } = checked;
+  const { section, material, analysis, outcome } = checked;
   const diagrams = sampleDiagrams(analysis, check.samples);
   const selfWeightIntensity = check.selfWeight ? material.density * section.properties.area * STANDARD_GRAVITY : 0;
   return {
@@ -124,7 +162,8 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
     diagrams: presentDiagrams(diagrams, units),
     extremes: presentExtremes(analysis, units),
     equilibrium: presentEquilibrium(analysis, units),
-    notices: [SCREENING_CAUTION],
+    ...presentChecks(outcome, units),
+    notices: [...outcome.notices],
   };
 }
 

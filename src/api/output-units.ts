@@ -58,7 +58,10 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
   const names = { ...SI_UNITS };
   const factors = { ...SI_OUTPUT.factors };
   const errors: FieldError[] = [];
-  for (const [kind, unitName] of Object.entries(request) as [QuantityKind, string][]) {
+  // Deflections are lengths: they follow the length unit unless given a unit of their own.
+  const entries = Object.entries(request) as [QuantityKind, string][];
+  if (request.length !== undefined && request.deflection === undefined) entries.push(['deflection', request.length]);
+  for (const [kind, unitName] of entries) {
     const factor = unitFactorToSI(unitName, kind);
     if (factor === undefined) {
       errors.push(invalidField([...path, kind], `"${unitName}" is not a unit of ${kind} (SI: ${QUANTITY_KINDS[kind]})`).errors[0] as FieldError);

@@ -38,3 +38,10 @@ describe('resolveOutputUnits', () => {
     expect(Object.is(present(SI_OUTPUT, 'force', -0), 0)).toBe(true);
   });
 });
+
+describe('deflection units', () => {
+  it('follow the length unit unless given their own', () => {
+    expect(resolveOutputUnits({ length: 'mm' }, []).names.deflection).toBe('mm');
+    expect(resolveOutputUnits({ length: 'm', deflection: 'mm' }, []).names.deflection).toBe('mm');
+  });
+});

@@ -1,5 +1,6 @@
 /** POST /v1/member-checks: one member, its supports, loads, section and material. */
 
+import { bucklingInput, criteriaInput, lateralTorsionalInput } from './check-options.js';
 import { materialInput } from './material-input.js';
 import { loadsInput, memberInput } from './member-input.js';
 import { outputOptions } from './output-options.js';
@@ -35,6 +36,9 @@ export const memberCheckRequest = z
       .boolean()
       .optional()
       .openapi({ description: 'Add the member\'s own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false.' }),
+    criteria: criteriaInput.optional(),
+    buckling: bucklingInput.optional(),
+    lateralTorsional: lateralTorsionalInput.optional(),
     output: outputOptions.optional(),
   })
   .openapi('MemberCheckRequest', {

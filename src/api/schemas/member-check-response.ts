@@ -2,6 +2,7 @@
 
 import { QUANTITY_KINDS, type QuantityKind } from '../quantities.js';
 import { diagramsOutput, equilibriumOutput, extremesOutput, reactionOutput } from './analysis-output.js';
+import { checksOutput } from './check-output.js';
 import { materialOutput } from './material-output.js';
 import { resolvedSectionOutput } from './section-output.js';
 import { z } from './zod.js';
@@ -30,6 +31,7 @@ export const memberCheckResponse = z
     diagrams: diagramsOutput,
     extremes: extremesOutput,
     equilibrium: equilibriumOutput,
+    ...checksOutput,
     notices,
   })
   .openapi('MemberCheckResponse');

@@ -1,5 +1,6 @@
 /** The member, its supports, hinges and loads, as a request gives them. */
 
+import { pinInput } from './check-options.js';
 import { quantity } from './quantity.js';
 import { z } from './zod.js';
 
@@ -31,6 +32,7 @@ const presetSupport = z
       description: 'fixed: all six directions restrained. pinned: ux, uy, uz and rx restrained, bending rotations free. roller: uy, uz and rx restrained, free along x and in bending rotation.',
     }),
     label: z.string().max(64).optional().openapi({ description: 'A name echoed with the reaction.' }),
+    pin: pinInput.optional(),
   })
   .openapi('PresetSupport');
 
@@ -41,6 +43,7 @@ const generalSupport = z
     restrained: z.array(direction).max(6).openapi({ description: 'The directions the support holds rigidly.' }),
     springs: springs.optional(),
     label: z.string().max(64).optional().openapi({ description: 'A name echoed with the reaction.' }),
+    pin: pinInput.optional(),
   })
   .openapi('GeneralSupport', { description: 'A support that names what it restrains, with optional springs.' });
 

@@ -1,0 +1,114 @@
+/** Presenting the failure checks in the response's units; null values are left out, never sent as null. */
+
+import type { BucklingAxisResult, CheckQuantity, MemberCheckOutcome, StressExtreme } from '../../engine/checks/check-outcome.js';
+import { present, type OutputUnits } from '../output-units.js';
+import type { QuantityKind } from '../quantities.js';
+
+const CHECK_KINDS: Record<CheckQuantity, QuantityKind> = {
+  stress: 'stress',
+  force: 'force',
+  moment: 'moment',
+  length: 'deflection',
+  angle: 'angle',
+};
+
+const CHECK_QUANTITY_NAMES: Record<CheckQuantity, 'stress' | 'force' | 'moment' | 'deflection' | 'angle'> = {
+  stress: 'stress',
+  force: 'force',
+  moment: 'moment',
+  length: 'deflection',
+  angle: 'angle',
+};
+
+function optional<T, U>(value: T | null | undefined, key: string, map: (value: T) => U): Record<string, U> {
+  return value === null || value === undefined ? {} : { [key]: map(value) };
+}
+
+function presentAxis(axis: BucklingAxisResult, units: OutputUnits) {
+  return {
+    axis: axis.axis,
+    regime: axis.regime,
+    slendernessRatio: axis.slendernessRatio,
+    transitionSlendernessRatio: axis.transitionSlendernessRatio,
+    criticalStress: present(units, 'stress', axis.criticalStress),
+    criticalLoad: present(units, 'force', axis.criticalLoad),
+    effectiveLength: present(units, 'length', axis.effectiveLength),
+    effectiveLengthFactor: axis.effectiveLengthFactor,
+    ...optional(axis.safetyFactor, 'safetyFactor', (v) => v),
+  };
+}
+
+function presentStress(extreme: StressExtreme, units: OutputUnits) {
+  return {
+    value: present(units, 'stress', extreme.value),
+    ...optional(extreme.position, 'position', (v) => present(units, 'length', v)),
+    ...optional(extreme.location, 'location', (v) => v),
+  };
+}
+
+export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits) {
+  const ltb = outcome.lateralTorsionalBuckling;
+  const { stresses, criteria, governing } = outcome;
+  return {
+    checks: outcome.checks.map((check) => {
+      const kind = CHECK_KINDS[check.quantity];
+      return {
+        mode: check.mode,
+        quantity: CHECK_QUANTITY_NAMES[check.quantity],
+        demand: present(units, kind, check.demand),
+        capacity: present(units, kind, check.capacity),
+        ...optional(check.safetyFactor, 'safetyFactor', (v) => v),
+        requiredSafetyFactor: check.requiredSafetyFactor,
+        utilization: check.utilization,
+        passes: check.passes,
+        ...optional(check.position, 'position', (v) => present(units, 'length', v)),
+        ...optional(check.location, 'location', (v) => v),
+        basis: check.basis,
+      };
+    }),
+    notApplicable: outcome.notApplicable.map(({ mode, reason }) => ({ mode, reason })),
+    ...(governing === null
+      ? {}
+      : {
+          governing: {
+            mode: governing.mode,
+            utilization: governing.utilization,
+            safetyFactor: governing.safetyFactor,
+            ...optional(governing.position, 'position', (v) => present(units, 'length', v)),
+            ...optional(governing.location, 'location', (v) => v),
+          },
+        }),
+    verdict: outcome.verdict,
+    buckling: { governing: presentAxis(outcome.buckling.governing, units), axes: outcome.buckling.axes.map((axis) => presentAxis(axis, units)) },
+    ...(ltb === null
+      ? {}
+      : {
+          lateralTorsionalBuckling: {
+            from: present(units, 'length', ltb.from),
+            to: present(units, 'length', ltb.to),
+            unbracedLength: present(units, 'length', ltb.unbracedLength),
+            effectiveLength: present(units, 'length', ltb.effectiveLength),
+            momentGradientFactor: ltb.momentGradientFactor,
+            criticalMoment: present(units, 'moment', ltb.criticalMoment),
+          },
+        }),
+    stresses: {
+      axialTension: presentStress(stresses.axialTension, units),
+      axialCompression: presentStress(stresses.axialCompression, units),
+      bendingTension: presentStress(stresses.bendingTension, units),
+      bendingCompression: presentStress(stresses.bendingCompression, units),
+      transverseShear: presentStress(stresses.transverseShear, units),
+      averageShear: presentStress(stresses.averageShear, units),
+      torsionalShear: presentStress(stresses.torsionalShear, units),
+      equivalent: presentStress(stresses.equivalent, units),
+    },
+    criteria: {
+      requiredSafetyFactor: { ...criteria.requiredSafetyFactor },
+      deflectionLimitRatio: criteria.deflectionLimitRatio,
+      cantileverDeflectionLimitRatio: criteria.cantileverDeflectionLimitRatio,
+      allowedTwist: present(units, 'angle', criteria.allowedTwist),
+      shearYieldRatio: criteria.shearYieldRatio,
+      defaulted: [...criteria.defaulted],
+    },
+  };
+}

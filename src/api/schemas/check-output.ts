@@ -1,0 +1,95 @@
+/** The checks part of a member-check response: every failure check, the governing one, buckling, stresses. */
+
+import { FAILURE_MODES } from '../../engine/checks/failure-mode.js';
+import { presentedQuantity } from './quantity.js';
+import { z } from './zod.js';
+
+const mode = z.enum(FAILURE_MODES).openapi({ description: 'The failure mode.' });
+
+export const failureCheckOutput = z
+  .object({
+    mode,
+    quantity: z.enum(['stress', 'force', 'moment', 'deflection', 'angle']).openapi({ description: 'What demand and capacity measure, so which unit of `units` they are in.' }),
+    demand: z.number().openapi({ description: 'The largest load effect found (>= 0).' }),
+    capacity: z.number().openapi({ description: 'The resistance it is compared with (> 0).' }),
+    safetyFactor: z.number().optional().openapi({ description: 'capacity / demand; absent when the demand is zero.' }),
+    requiredSafetyFactor: z.number().openapi({ description: 'The factor the criteria require for this mode.' }),
+    utilization: z.number().openapi({ description: 'demand x requiredSafetyFactor / capacity; passes when <= 1; 0 with no demand.' }),
+    passes: z.boolean(),
+    position: presentedQuantity('length', 'Where along the member the demand peaks; absent for a member-wide check or no demand.').optional(),
+    location: z.string().optional().openapi({ description: 'Where on the section, or which part of the member.' }),
+    basis: z.string().openapi({ description: 'The formula and its source, in one line.' }),
+  })
+  .openapi('FailureCheck');
+
+const bucklingAxis = z
+  .object({
+    axis: z.enum(['y', 'z', 'minor']).openapi({ description: "The axis bent about; 'minor' is the minor principal axis of an angle." }),
+    regime: z.enum(['euler', 'johnson', 'none']).openapi({ description: "euler above the transition slenderness, johnson below; 'none' when nothing is in compression." }),
+    slendernessRatio: z.number().openapi({ description: 'K L / r, dimensionless.' }),
+    transitionSlendernessRatio: z.number().openapi({ description: 'sqrt(2 pi^2 E / Sy), dimensionless.' }),
+    criticalStress: presentedQuantity('stress', 'Critical stress of the regime.'),
+    criticalLoad: presentedQuantity('force', 'Critical load.'),
+    effectiveLength: presentedQuantity('length', 'K L.'),
+    effectiveLengthFactor: z.number().openapi({ description: 'K, dimensionless.' }),
+    safetyFactor: z.number().optional().openapi({ description: 'criticalLoad / largest compressive force; absent with no compression.' }),
+  })
+  .openapi('BucklingAxis');
+
+const stressExtreme = z.object({
+  value: presentedQuantity('stress', 'The largest value (>= 0).'),
+  position: presentedQuantity('length', 'Where along the member.').optional(),
+  location: z.string().optional().openapi({ description: 'Where on the section.' }),
+});
+
+export const checksOutput = {
+  checks: z.array(failureCheckOutput).openapi({ description: 'Every applicable failure check.' }),
+  notApplicable: z.array(z.object({ mode, reason: z.string() })).openapi({ description: 'Modes not checked for this member, and why.' }),
+  governing: z
+    .object({
+      mode,
+      utilization: z.number(),
+      safetyFactor: z.number(),
+      position: presentedQuantity('length', 'Where it governs.').optional(),
+      location: z.string().optional(),
+    })
+    .optional()
+    .openapi({ description: 'The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand.' }),
+  verdict: z.enum(['pass', 'fail']).openapi({ description: 'pass when every check passes.' }),
+  buckling: z
+    .object({ governing: bucklingAxis, axes: z.array(bucklingAxis) })
+    .openapi('Buckling', { description: 'Column buckling about each principal axis; governing is the axis with the lowest critical load.' }),
+  lateralTorsionalBuckling: z
+    .object({
+      from: presentedQuantity('length', 'Start of the governing unbraced length.'),
+      to: presentedQuantity('length', 'End of the governing unbraced length.'),
+      unbracedLength: presentedQuantity('length', 'Unbraced length.'),
+      effectiveLength: presentedQuantity('length', 'Effective length used in the formula.'),
+      momentGradientFactor: z.number().openapi({ description: 'C1 (Cb), dimensionless.' }),
+      criticalMoment: presentedQuantity('moment', 'Elastic critical moment.'),
+    })
+    .optional()
+    .openapi({ description: 'Absent when lateral-torsional buckling does not apply.' }),
+  stresses: z
+    .object({
+      axialTension: stressExtreme,
+      axialCompression: stressExtreme,
+      bendingTension: stressExtreme,
+      bendingCompression: stressExtreme,
+      transverseShear: stressExtreme,
+      averageShear: stressExtreme,
+      torsionalShear: stressExtreme,
+      equivalent: stressExtreme,
+    })
+    .openapi('Stresses', { description: 'The largest stresses along the member: axial, bending (tension and compression side), transverse shear V Q / (I b) with the average V / A beside it, torsional, and the equivalent (von Mises, or modified Mohr for brittle materials).' }),
+  criteria: z
+    .object({
+      requiredSafetyFactor: z.record(z.string(), z.number()),
+      deflectionLimitRatio: z.number(),
+      cantileverDeflectionLimitRatio: z.number(),
+      allowedTwist: presentedQuantity('angle', 'Allowed twist.'),
+      shearYieldRatio: z.number(),
+      defaulted: z.array(z.string()).openapi({ description: 'The criteria taken from the defaults, which stand in for the governing code.' }),
+    })
+    .openapi('CriteriaUsed', { description: 'The criteria used, defaults filled in.' }),
+};

@@ -58,10 +58,7 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
   const names = { ...SI_UNITS };
   const factors = { ...SI_OUTPUT.factors };
   const errors: FieldError[] = [];
-  // Deflections are lengths: they follow the length unit unless given a unit of their own.
-  const entries = Object.entries(request) as [QuantityKind, string][];
-  if (request.length !== undefined && request.deflection === undefined) entries.push(['deflection', request.length]);
-  for (const [kind, unitName] of entries) {
+  for (const [kind, unitName] of Object.entries(request) as [QuantityKind, string][]) {
     const factor = unitFactorToSI(unitName, kind);
     if (factor === undefined) {
       errors.push(invalidField([...path, kind], `"${unitName}" is not a unit of ${kind} (SI: ${QUANTITY_KINDS[kind]})`).errors[0] as FieldError);
@@ -71,6 +68,11 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
     factors[kind] = factor;
   }
   if (errors.length > 0) throw new ProblemError('invalidInput', 'Some output units are not valid.', errors);
+  // Deflections are lengths: they follow the length unit unless given a unit of their own.
+  if (request.length !== undefined && request.deflection === undefined) {
+    names.deflection = names.length;
+    factors.deflection = factors.length;
+  }
   return { names, factors };
 }
 

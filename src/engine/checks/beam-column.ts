@@ -18,7 +18,7 @@ import type { CheckContext, CheckFindings } from './check-context.js';
 import type { FailureCheck, NotApplicableCheck } from './check-outcome.js';
 import { columnAxes, eulerLoad, bucklesAboutMinorAxis, type ColumnAxis } from './column-buckling.js';
 import { largestMagnitudeOn, type Peak } from './critical-positions.js';
-import { failureCheck } from './failure-check.js';
+import { failureCheck, safetyRatio } from './failure-check.js';
 
 /**
  * The smallest lambda in (0, upper) where a convex g with g(0) < 0 reaches 0, by bisection to machine
@@ -162,8 +162,9 @@ export function beamColumnChecks(context: CheckContext, compression: Peak): Chec
   const { buckling = {} } = context.input;
   const checks: FailureCheck[] = [];
   const notApplicable: NotApplicableCheck[] = [];
-  const noCompression = compression.value <= 0;
   const axes = columnAxes(context);
+  const force = compression.value * context.input.section.area;
+  const noCompression = axes.some((axis) => safetyRatio(eulerLoad(context, axis), force) === null);
   if (!buckling.amplification) {
     notApplicable.push({ mode: 'beam-column', reason: 'moment amplification not requested (buckling.amplification)' });
   } else if (noCompression) {

@@ -9,7 +9,7 @@ import type { CheckContext, CheckFindings } from './check-context.js';
 import type { BucklingAxis, BucklingAxisResult, BucklingRegime, BucklingSummary } from './check-outcome.js';
 import type { Peak } from './critical-positions.js';
 import { resolveEffectiveLengthFactor, type EffectiveLengthFactor } from './effective-length.js';
-import { failureCheck } from './failure-check.js';
+import { failureCheck, safetyRatio } from './failure-check.js';
 import { productMomentOf } from './section-stresses.js';
 
 /** (l/k)_1 = sqrt(2 pi^2 E / Sy) (Shigley 10th ed., eq. 4-45, from memory). */
@@ -85,25 +85,26 @@ export function columnBuckling(
   const { section, material } = context.input;
   const yieldStrength = context.strengths.compression.value;
   const compressiveForce = compression.value * section.area;
-  const axes: BucklingAxisResult[] = columnAxes(context).map((axis) => {
+  const columns = columnAxes(context).map((axis) => {
     const slendernessRatio = axis.effectiveLength / axis.radiusOfGyration;
     const { regime, stress } = columnCriticalStress(material.elasticModulus, yieldStrength, slendernessRatio);
-    const criticalLoad = stress * section.area;
-    return {
-      axis: axis.axis,
-      regime: compressiveForce > 0 ? regime : 'none',
-      slendernessRatio,
-      transitionSlendernessRatio: transitionSlendernessRatio(material.elasticModulus, yieldStrength),
-      criticalStress: stress,
-      criticalLoad,
-      effectiveLength: axis.effectiveLength,
-      effectiveLengthFactor: axis.effectiveLengthFactor.factor,
-      safetyFactor: compressiveForce > 0 ? criticalLoad / compressiveForce : null,
-    };
+    return { axis, slendernessRatio, regime, stress, criticalLoad: stress * section.area };
   });
+  const compressed = columns.every((column) => safetyRatio(column.criticalLoad, compressiveForce) !== null);
+  const axes: BucklingAxisResult[] = columns.map((column) => ({
+    axis: column.axis.axis,
+    regime: compressed ? column.regime : 'none',
+    slendernessRatio: column.slendernessRatio,
+    transitionSlendernessRatio: transitionSlendernessRatio(material.elasticModulus, yieldStrength),
+    criticalStress: column.stress,
+    criticalLoad: column.criticalLoad,
+    effectiveLength: column.axis.effectiveLength,
+    effectiveLengthFactor: column.axis.effectiveLengthFactor.factor,
+    safetyFactor: compressed ? safetyRatio(column.criticalLoad, compressiveForce) : null,
+  }));
   const governing = axes.reduce((worst, axis) => (axis.criticalLoad < worst.criticalLoad ? axis : worst));
   const summary = { governing, axes };
-  if (compressiveForce <= 0) {
+  if (!compressed) {
     return {
       summary,
       findings: { checks: [], notApplicable: [{ mode: 'buckling', reason: 'no compressive axial force anywhere along the member' }] },

@@ -87,7 +87,7 @@ export function effectiveLengthFactorFromSupports(
   const [first, second] = ends as [EndRestraint, EndRestraint];
   const endConditions = ENDS_TO_CONDITIONS[`${first}-${second}`];
   if (endConditions === undefined) {
-    return { factor: 2.0, basis: `ends ${first} and ${second} give no idealised column: K = 2 assumed` };
+    return { factor: 2.0, basis: `ends ${first} and ${second} form no idealised column: K = 2 assumed, give an effective-length factor` };
   }
   return {
     factor: effectiveLengthFactorFor(endConditions, recommendedDesignValues),

@@ -35,9 +35,20 @@ export function failureCheck(spec: FailureCheckSpec): FailureCheck {
     });
   }
   const demand = Math.max(0, spec.demand);
-  if (demand === 0) {
-    return { ...spec, demand, safetyFactor: null, utilization: 0, passes: true, position: null, location: null };
+  const safetyFactor = safetyRatio(capacity, demand);
+  if (safetyFactor === null) {
+    return { ...spec, demand: 0, safetyFactor: null, utilization: 0, passes: true, position: null, location: null };
   }
   const utilization = (demand * requiredSafetyFactor) / capacity;
-  return { ...spec, demand, safetyFactor: capacity / demand, utilization, passes: utilization <= 1 };
+  return { ...spec, demand, safetyFactor, utilization, passes: utilization <= 1 };
+}
+
+/**
+ * capacity / demand, or null when there is no demand: zero, or so small that the ratio overflows
+ * (a subnormal residue, zero to every purpose).
+ */
+export function safetyRatio(capacity: number, demand: number): number | null {
+  if (!(demand > 0)) return null;
+  const ratio = capacity / demand;
+  return Number.isFinite(ratio) ? ratio : null;
 }

@@ -37,6 +37,12 @@ describe('failureCheck', () => {
     expect(check.location).toBeNull();
   });
 
+  it('counts a subnormal demand, whose safety factor would overflow, as zero', () => {
+    const check = failureCheck({ ...spec, demand: 5e-324 });
+    expect(check.demand).toBe(0);
+    expect(check.safetyFactor).toBeNull();
+  });
+
   it('refuses a capacity that is not positive and finite instead of dividing by it', () => {
     expect(() => failureCheck({ ...spec, capacity: 0, demand: 1 })).toThrow(EngineError);
     expect(() => failureCheck({ ...spec, capacity: Number.POSITIVE_INFINITY, demand: 1 })).toThrow(EngineError);

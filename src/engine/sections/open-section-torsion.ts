@@ -6,6 +6,8 @@
  * outer face(s) and the root fillet(s); with rootRadius 0 it is the sharp-cornered junction.
  */
 
+import { rectangleTorsion } from './rectangle-torsion.js';
+
 /** A plate a x b with both short ends free (Roark 8th ed., Table 10.7, case 4, written with full sides). */
 export function plateTorsionConstant(sideOne: number, sideTwo: number): number {
   const a = Math.max(sideOne, sideTwo);
@@ -34,12 +36,18 @@ export function teeJunctionTorsionConstant(flangeThickness: number, webThickness
   return alpha * teeJunctionDiameter(tf, tw, rootRadius) ** 4;
 }
 
-/** The circle touching the flange's outer face and both fillets of a tee or I junction. */
+/**
+ * The largest circle at a tee or I junction. Roark's D touches the flange's outer face and both
+ * fillets; it is inscribed only while its centre lies no deeper than the fillet centres (tf + r).
+ * Deeper (a web more than 2 (tf + r) thick) the web's own sides bound it: D = tw, the same value
+ * where the two meet.
+ */
 export function teeJunctionDiameter(flangeThickness: number, webThickness: number, rootRadius: number): number {
   const tf = flangeThickness;
   const tw = webThickness;
   const r = rootRadius;
-  return ((tf + r) ** 2 + tw * (r + tw / 4)) / (2 * r + tf);
+  const touchingFillets = ((tf + r) ** 2 + tw * (r + tw / 4)) / (2 * r + tf);
+  return touchingFillets / 2 <= tf + r ? touchingFillets : tw;
 }
 
 /**
@@ -54,8 +62,33 @@ export function cornerJunctionTorsionConstant(thicknessOne: number, thicknessTwo
   return alpha * cornerJunctionDiameter(thick, thin, rootRadius) ** 4;
 }
 
-/** The circle touching both outer faces and the fillet of a right-angled corner. */
+/**
+ * The largest circle at a right-angled corner. Roark's D touches both outer faces and the fillet;
+ * it is inscribed only while its centre lies within the thinner plate and its fillet (t_thin + r)
+ * of the thinner plate's outer face. Farther (a thin plate on a thick one) the thick plate's own
+ * faces bound it: D = t_thick, the same value where the two meet.
+ */
 export function cornerJunctionDiameter(thicknessOne: number, thicknessTwo: number, rootRadius: number): number {
   const r = rootRadius;
-  return 2 * (thicknessOne + thicknessTwo + 3 * r - Math.sqrt(2 * (2 * r + thicknessOne) * (2 * r + thicknessTwo)));
+  const touchingFillet = 2 * (thicknessOne + thicknessTwo + 3 * r - Math.sqrt(2 * (2 * r + thicknessOne) * (2 * r + thicknessTwo)));
+  return touchingFillet / 2 <= Math.min(thicknessOne, thicknessTwo) + r ? touchingFillet : Math.max(thicknessOne, thicknessTwo);
+}
+
+/**
+ * Keeps an estimate of J for a solid (simply connected) section within rigorous bounds: at least the
+ * exact J of a rectangle it contains and at most that of its bounding rectangle, since torsional
+ * rigidity grows with the domain (Polya & Szego, Isoperimetric Inequalities in Mathematical
+ * Physics, 1951), and at most the polar moment Iz + Iy (J = Ip less the warping term, Saint-Venant).
+ * The plate-and-junction formulas hold for plates a few times longer than thick; for stubby
+ * outlines (a leg or stem about as thick as long) they can overshoot, and the bounds then govern.
+ */
+export function torsionConstantWithinBounds(
+  estimate: number,
+  containedRectangles: readonly (readonly [number, number])[],
+  boundingRectangle: readonly [number, number],
+  polarMoment: number,
+): number {
+  const lower = Math.max(...containedRectangles.map(([a, b]) => rectangleTorsion(a, b).torsionConstant));
+  const upper = Math.min(rectangleTorsion(...boundingRectangle).torsionConstant, polarMoment);
+  return Math.min(upper, Math.max(lower, estimate));
 }

@@ -108,10 +108,10 @@ export function extentAlong(part: RegionPart, coordinate: Coordinate): readonly 
 
 /** Antiderivatives in t = s - centre of w, t w and t^2 w with w = sqrt(r^2 - t^2) (standard integrals). */
 function circleAntiderivatives(t: number, radius: number): readonly [number, number, number] {
-  const ratio = Math.min(1, Math.max(-1, t / radius));
-  const clamped = ratio * radius;
-  const root = Math.sqrt(Math.max(0, radius * radius - clamped * clamped));
-  const angle = Math.asin(ratio);
+  const clamped = Math.min(radius, Math.max(-radius, t));
+  // (r - t)(r + t) and atan2 stay accurate near the rim, where r^2 - t^2 and asin(t / r) lose digits.
+  const root = Math.sqrt((radius - clamped) * (radius + clamped));
+  const angle = Math.atan2(clamped, root);
   const r2 = radius * radius;
   return [
     (clamped * root + r2 * angle) / 2,
@@ -159,8 +159,8 @@ export function chordAt(part: RegionPart, coordinate: Coordinate, at: number, si
   const inside = side === 'below' ? profile.min < at && at <= profile.max : profile.min <= at && at < profile.max;
   if (!inside) return 0;
   if (profile.kind === 'constant') return part.sign * profile.chord;
-  const t = at - profile.centre;
-  return part.sign * Math.sqrt(Math.max(0, profile.radius * profile.radius - t * t));
+  const t = Math.min(profile.radius, Math.abs(at - profile.centre));
+  return part.sign * Math.sqrt((profile.radius - t) * (profile.radius + t));
 }
 
 /** Signed integral of y z dA over the piece, about the origin. */

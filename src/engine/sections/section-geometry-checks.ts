@@ -36,9 +36,9 @@ export function requireBelow(value: number, limit: number, field: string, what: 
   }
 }
 
-/** value <= limit: for radii that may just reach the edge they run to. */
+/** value <= limit: for radii that may just reach the edge they run to (rounding in the last bits allowed). */
 export function requireAtMost(value: number, limit: number, field: string, what: string): void {
-  if (!(value <= limit)) {
+  if (!(value <= limit * (1 + 1e-12))) {
     throw impossibleGeometry(field, `${field} (${value}) must not exceed ${what} (${limit}).`, { value, limit });
   }
 }

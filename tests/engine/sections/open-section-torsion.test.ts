@@ -6,6 +6,7 @@ import {
   plateTorsionConstant,
   teeJunctionDiameter,
   teeJunctionTorsionConstant,
+  torsionConstantWithinBounds,
 } from '../../../src/engine/sections/open-section-torsion.js';
 
 describe('plate terms (Roark 8th ed., Table 10.7, case 4, full sides; from memory)', () => {
@@ -40,6 +41,20 @@ describe('junction diameters are the inscribed circles', () => {
     // Sharp equal corner: the circle through the re-entrant corner, D = 2 sqrt(2) t / (1 + sqrt(2)).
     expect(cornerJunctionDiameter(1, 1, 0)).toBeCloseTo((2 * Math.SQRT2) / (1 + Math.SQRT2), 14);
   });
+
+  it('is bounded by the web itself when the web is more than 2 (tf + r) thick', () => {
+    // tf 1, tw 3, r 0: touching the face and both corners would need radius (1 + 9/4) / 2 = 1.625 > tf,
+    // so the circle would poke out of the web's sides; the web's own circle, D = tw = 3, is the largest.
+    expect(teeJunctionDiameter(1, 3, 0)).toBe(3);
+    // At the limit tw = 2 (tf + r) both agree: tf 1, tw 2, r 0 gives (1 + 1) / 1 = 2 = tw.
+    expect(teeJunctionDiameter(1, 2, 0)).toBeCloseTo(2, 14);
+  });
+
+  it('is bounded by the thick plate when a thin plate meets it', () => {
+    // t 10 and 1, r 0: touching both faces and the corner gives radius 11 - sqrt(20) = 6.53 > 1 + 0,
+    // so the circle sits in the thick plate alone: D = 10.
+    expect(cornerJunctionDiameter(10, 1, 0)).toBe(10);
+  });
 });
 
 describe('junction terms alpha D^4 (Roark 8th ed., Table 10.7, after El Darwish & Johnston; from memory)', () => {
@@ -53,5 +68,18 @@ describe('junction terms alpha D^4 (Roark 8th ed., Table 10.7, after El Darwish 
     const alpha = 1 * (0.07 + (0.076 * 12) / 10);
     expect(cornerJunctionTorsionConstant(10, 10, 12)).toBeCloseTo(alpha * cornerJunctionDiameter(10, 10, 12) ** 4, 8);
     expect(cornerJunctionTorsionConstant(6, 11, 13)).toBeCloseTo(cornerJunctionTorsionConstant(11, 6, 13), 10);
+  });
+});
+
+describe('torsionConstantWithinBounds', () => {
+  // Exact J of a 1 x 1 square: 0.140577 (rectangle series); of a 2 x 1 rectangle 2 * 0.228682 = 0.457363.
+  it('passes an estimate that lies within the bounds', () => {
+    expect(torsionConstantWithinBounds(0.2, [[1, 1]], [2, 1], 1)).toBe(0.2);
+  });
+
+  it('raises it to the contained rectangle and lowers it to the bounding one or the polar moment', () => {
+    expect(torsionConstantWithinBounds(0.1, [[1, 1]], [2, 1], 1)).toBeCloseTo(0.140577, 6);
+    expect(torsionConstantWithinBounds(0.5, [[1, 1]], [2, 1], 1)).toBeCloseTo(0.457363, 6);
+    expect(torsionConstantWithinBounds(0.3, [[1, 1]], [2, 1], 0.2)).toBe(0.2);
   });
 });

@@ -1,5 +1,6 @@
 /** The plain-words notices that go with every check outcome: what the checks assume and leave out. */
 
+import type { KnownSectionProperties } from '../sections/section-properties.js';
 import type { CheckContext } from './check-context.js';
 import type { FailureCheck } from './check-outcome.js';
 import { largestMagnitudeOn } from './critical-positions.js';
@@ -27,6 +28,18 @@ export const LATERAL_TORSIONAL_NOTICE =
 export const AMPLIFICATION_NOTICE =
   'The beam-column check takes the largest compressive force and the largest moments together, wherever they occur.';
 
+/** What each stand-in of a section given by its properties means for the checks (see KnownSectionProperties). */
+export const STAND_IN_NOTICES: Readonly<Partial<Record<keyof KnownSectionProperties, string>>> = {
+  bendingStressZ:
+    'No depth or sectionModulusZ was given: bending stresses about z take the radius of gyration as the fibre distance, which understates them.',
+  bendingStressY:
+    'No width or sectionModulusY was given: bending stresses about y take the radius of gyration as the fibre distance, which understates them.',
+  shearStressY: "No shear area along y was given: the transverse shear stress is a solid rectangle's 1.5 V / A, which understates a thin web's.",
+  shearStressZ: "No shear area along z was given: the transverse shear stress is a solid rectangle's 1.5 V / A, which understates thin flanges'.",
+  torsionalShearStress: 'No torsional modulus was given: the torsional shear stress is T R / J with R the half diagonal, an upper bound.',
+  productMoment: 'The given axes are taken as the principal axes (no product moment).',
+};
+
 export const NO_DEMAND_NOTICE = 'No load effect anywhere on the member: every utilization is zero.';
 
 const THIN_WALLED_SHAPES = new Set(['i-section', 'channel', 'tee', 'angle', 'box', 'tube']);
@@ -45,6 +58,9 @@ export function memberNotices(context: CheckContext, checks: readonly FailureChe
   if (criteria.defaulted.length > 0) notices.push(defaultsNotice(criteria.defaulted));
   if (input.material.behaviour === 'brittle') notices.push(BRITTLE_NOTICE);
   if (THIN_WALLED_SHAPES.has(section.shape)) notices.push(LOCAL_BUCKLING_NOTICE);
+  for (const [property, notice] of Object.entries(STAND_IN_NOTICES)) {
+    if (section.known?.[property as keyof KnownSectionProperties] === false) notices.push(notice);
+  }
   if (productMomentOf(section) !== 0) notices.push(UNSYMMETRIC_NOTICE);
   if (peaks.transverseShear.value > 0) {
     notices.push(transverseShearPerForce(section).elementary ? ELEMENTARY_SHEAR_NOTICE : AVERAGE_SHEAR_NOTICE);

@@ -10,6 +10,7 @@ import {
   NO_DEMAND_NOTICE,
   UNSYMMETRIC_NOTICE,
   BIAXIAL_SHEAR_NOTICE,
+  STAND_IN_NOTICES,
 } from '../../../src/engine/checks/notices.js';
 import { analysisFrom, constantAxial, simpleSpanUniformLoad } from './fixtures/analyses.js';
 import { inputOf } from './fixtures/inputs.js';
@@ -53,6 +54,27 @@ describe('memberNotices', () => {
     expect(outcome.notices).toContain(UNSYMMETRIC_NOTICE);
     const biaxial = analysisFrom(2, [{ start: 0, end: 2, fields: { shearY: [1e3], shearZ: [1e3], momentZ: [0, 1e3], momentY: [0, 1e3] } }]);
     expect(checkMember(inputOf({ analysis: biaxial, section: rectangle(0.1, 0.2), material: steel })).notices).toContain(BIAXIAL_SHEAR_NOTICE);
+  });
+
+  it('names the stand-ins of a section given by its properties', () => {
+    const known = {
+      bendingStressZ: false,
+      bendingStressY: true,
+      plasticModulusZ: true,
+      plasticModulusY: true,
+      shearStressY: false,
+      shearStressZ: true,
+      torsionalShearStress: true,
+      warpingConstant: true,
+      thickestElement: true,
+      productMoment: false,
+    };
+    const section = { ...rectangle(0.1, 0.2), shape: 'custom' as const, known };
+    const outcome = checkMember(inputOf({ analysis: simpleSpanUniformLoad(4, 1e3, 1), section, material: steel }));
+    expect(outcome.notices).toContain(STAND_IN_NOTICES.bendingStressZ);
+    expect(outcome.notices).toContain(STAND_IN_NOTICES.shearStressY);
+    expect(outcome.notices).toContain(STAND_IN_NOTICES.productMoment);
+    expect(outcome.notices).not.toContain(STAND_IN_NOTICES.bendingStressY);
   });
 
   it('says so when nothing loads the member', () => {

@@ -36,56 +36,94 @@ export function scalePolynomial(p: Polynomial, factor: number): number[] {
   return p.map((c) => c * factor);
 }
 
-/** Degree after dropping leading coefficients that are zero relative to the largest one. */
-function trimmed(p: Polynomial): number[] {
-  const scale = Math.max(0, ...p.map(Math.abs));
-  const out = [...p];
-  while (out.length > 0 && Math.abs(out[out.length - 1] as number) <= 1e-14 * scale) out.pop();
-  return out;
+/**
+ * Coefficients without the leading ones whose term is negligible on the interval: |c_k| R^k at or
+ * below 1e-14 of the largest term, R = max(|a|, |b|).
+ */
+function trimmedOn(p: Polynomial, a: number, b: number): number[] {
+  const reach = Math.max(Math.abs(a), Math.abs(b));
+  const terms: number[] = [];
+  let power = 1;
+  let largest = 0;
+  for (let k = 0; k < p.length; k++) {
+    const term = Math.abs(p[k] as number) * power;
+    terms.push(term);
+    if (term > largest) largest = term;
+    power *= reach;
+  }
+  let degree = p.length - 1;
+  while (degree >= 0 && (terms[degree] as number) <= 1e-14 * largest) degree--;
+  return p.slice(0, degree + 1);
 }
 
 /**
- * Real roots of p in the open interval (a, b), ascending. The interval is cut at the roots of p'
- * (found the same way), so p is monotonic on each part and a sign change brackets exactly one root,
- * which bisection then pins to machine precision.
+ * Real roots of p in the open interval (a, b), ascending. Degrees 1 and 2 are solved in closed form
+ * (the quadratic by the cancellation-free formula); higher degrees are cut at the roots of p' (found
+ * the same way), so p is monotonic on each part and a sign change brackets exactly one root, which a
+ * Newton iteration safeguarded by bisection pins to machine precision. A root where p touches zero
+ * without changing sign may be missed.
  */
 export function realRootsIn(p: Polynomial, a: number, b: number): number[] {
-  const q = trimmed(p);
-  if (q.length <= 1 || !(b > a)) return [];
+  if (!(b > a)) return [];
+  const q = trimmedOn(p, a, b);
+  if (q.length <= 1) return [];
   if (q.length === 2) {
     const root = -(q[0] as number) / (q[1] as number);
     return root > a && root < b ? [root] : [];
   }
+  if (q.length === 3) return quadraticRootsIn(q[0] as number, q[1] as number, q[2] as number, a, b);
   const cuts = [a, ...realRootsIn(derivative(q), a, b), b];
   const roots: number[] = [];
   for (let i = 0; i + 1 < cuts.length; i++) {
-    const lo = cuts[i] as number;
-    const hi = cuts[i + 1] as number;
-    const root = bracketedRoot(q, lo, hi);
-    if (root !== undefined && root > a && root < b) {
-      if (roots.length === 0 || root - (roots[roots.length - 1] as number) > 1e-12 * (b - a)) roots.push(root);
-    }
+    const root = bracketedRoot(q, cuts[i] as number, cuts[i + 1] as number);
+    if (root !== undefined && root > a && root < b) pushDistinct(roots, root, a, b);
   }
   return roots;
 }
 
+function pushDistinct(roots: number[], root: number, a: number, b: number): void {
+  if (roots.length === 0 || root - (roots[roots.length - 1] as number) > 1e-12 * (b - a)) roots.push(root);
+}
+
+/** Roots of c0 + c1 s + c2 s^2 in (a, b), via q = -(c1 + sign(c1) sqrt(D)) / 2 (Numerical Recipes 3rd ed., sec. 5.6; from memory). */
+function quadraticRootsIn(c0: number, c1: number, c2: number, a: number, b: number): number[] {
+  const discriminant = c1 * c1 - 4 * c2 * c0;
+  if (discriminant < 0) return [];
+  const q = -0.5 * (c1 + (c1 < 0 ? -1 : 1) * Math.sqrt(discriminant));
+  const candidates = q === 0 ? [0] : [q / c2, c0 / q].sort((x, y) => x - y);
+  const roots: number[] = [];
+  for (const root of candidates) if (root > a && root < b) pushDistinct(roots, root, a, b);
+  return roots;
+}
+
+/** The root of p in [lo, hi] where p changes sign, or undefined if it does not. */
 function bracketedRoot(p: Polynomial, lo: number, hi: number): number | undefined {
-  let fLo = evaluatePolynomial(p, lo);
+  const fLo = evaluatePolynomial(p, lo);
   const fHi = evaluatePolynomial(p, hi);
   if (fLo === 0) return lo;
   if (fHi === 0) return hi;
-  if (Math.sign(fLo) === Math.sign(fHi)) return undefined;
-  let left = lo;
-  let right = hi;
-  for (let i = 0; i < 200 && right - left > 0; i++) {
-    const mid = 0.5 * (left + right);
-    if (mid === left || mid === right) break;
-    const fMid = evaluatePolynomial(p, mid);
-    if (fMid === 0) return mid;
-    if (Math.sign(fMid) === Math.sign(fLo)) {
-      left = mid;
-      fLo = fMid;
-    } else right = mid;
+  if (fLo < 0 === fHi < 0) return undefined;
+  let negative = fLo < 0 ? lo : hi;
+  let positive = fLo < 0 ? hi : lo;
+  let x = 0.5 * (lo + hi);
+  let lastStep = hi - lo;
+  for (let i = 0; i < 200; i++) {
+    let value = 0;
+    let slope = 0;
+    for (let k = p.length - 1; k >= 0; k--) {
+      slope = slope * x + value;
+      value = value * x + (p[k] as number);
+    }
+    if (value === 0) return x;
+    if (value < 0) negative = x;
+    else positive = x;
+    const left = Math.min(negative, positive);
+    const right = Math.max(negative, positive);
+    let next = x - value / slope;
+    if (!(next > left && next < right) || Math.abs(next - x) > 0.5 * lastStep) next = 0.5 * (left + right);
+    lastStep = Math.abs(next - x);
+    if (next === x || lastStep <= 2 * Number.EPSILON * Math.abs(next) || right - left <= 0) return next;
+    x = next;
   }
-  return 0.5 * (left + right);
+  return x;
 }

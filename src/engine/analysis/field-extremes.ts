@@ -1,0 +1,75 @@
+/**
+ * The largest and smallest value of every field over the member, found analytically: the candidates
+ * are the values on both sides of every node and the values at the roots of the field's derivative
+ * inside every piece. Among equal values (within ZERO_TOLERANCE of the field's largest magnitude)
+ * the first position wins; a value that small is reported as exactly 0.
+ */
+
+import { derivative, evaluatePolynomial, realRootsIn } from './polynomial.js';
+import { DIAGRAM_FIELDS, type DiagramField, type FieldExtremes, type MemberPiece } from './result.js';
+import { roundedToZero, ZERO_TOLERANCE } from './tolerances.js';
+
+/** Candidate values and positions of one field, in ascending position. */
+class Candidates {
+  values = new Float64Array(64);
+  positions = new Float64Array(64);
+  count = 0;
+
+  push(value: number, position: number): void {
+    if (this.count === this.values.length) {
+      const values = new Float64Array(this.count * 2);
+      const positions = new Float64Array(this.count * 2);
+      values.set(this.values);
+      positions.set(this.positions);
+      this.values = values;
+      this.positions = positions;
+    }
+    this.values[this.count] = value;
+    this.positions[this.count] = position;
+    this.count++;
+  }
+}
+
+function extremesOf(candidates: Candidates): FieldExtremes {
+  const { values, positions, count } = candidates;
+  let largest = Number.NEGATIVE_INFINITY;
+  let smallest = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < count; i++) {
+    const v = values[i] as number;
+    if (v > largest) largest = v;
+    if (v < smallest) smallest = v;
+  }
+  const scale = Math.max(Math.abs(largest), Math.abs(smallest));
+  const tie = ZERO_TOLERANCE * scale;
+  let max = -1;
+  let min = -1;
+  for (let i = 0; i < count && (max < 0 || min < 0); i++) {
+    const v = values[i] as number;
+    if (max < 0 && v >= largest - tie) max = i;
+    if (min < 0 && v <= smallest + tie) min = i;
+  }
+  const extreme = (i: number) => ({
+    value: roundedToZero(values[i] as number, scale),
+    position: positions[i] as number,
+  });
+  return { max: extreme(max), min: extreme(min) };
+}
+
+export function fieldExtremes(pieces: readonly MemberPiece[]): Record<DiagramField, FieldExtremes> {
+  const result = {} as Record<DiagramField, FieldExtremes>;
+  const candidates = new Candidates();
+  for (const field of DIAGRAM_FIELDS) {
+    candidates.count = 0;
+    for (const piece of pieces) {
+      const p = piece.fields[field];
+      const length = piece.end - piece.start;
+      candidates.push(evaluatePolynomial(p, 0), piece.start);
+      if (p.length > 2) {
+        for (const s of realRootsIn(derivative(p), 0, length)) candidates.push(evaluatePolynomial(p, s), piece.start + s);
+      }
+      candidates.push(evaluatePolynomial(p, length), piece.end);
+    }
+    result[field] = extremesOf(candidates);
+  }
+  return result;
+}

@@ -13,7 +13,7 @@
  * @example angleProperties({ shape: 'angle', legY: 0.1, legZ: 0.1, thickness: 0.01, rootRadius: 0.012 }).secondMomentMinor
  */
 
-import { governingShearCut, largerShearCut, plasticModulusAbout, summariseRegion } from './composite-region.js';
+import { outlineValues, summariseRegion } from './composite-region.js';
 import type { ShearCut } from './composite-region.js';
 import type { AngleDimensions } from './dimensions.js';
 import {
@@ -58,18 +58,9 @@ export function angleProperties(dimensions: AngleDimensions): SectionProperties 
     shape: 'angle',
     depth: legY,
     width: legZ,
-    area: region.area,
-    centroidY: region.centroidY,
-    centroidZ: region.centroidZ,
-    secondMomentZ: region.secondMomentZ,
-    secondMomentY: region.secondMomentY,
-    productMoment: region.productMoment,
-    plasticModulusZ: plasticModulusAbout(parts, 'z'),
-    plasticModulusY: plasticModulusAbout(parts, 'y'),
+    ...outlineValues(parts, region, { shearAlongY: alongLegZ, shearAlongZ: alongLegY }),
     torsionConstant,
     torsionalShearPerTorque: t / torsionConstant,
-    shearY: largerShearCut([governingShearCut(parts, 'y', region.centroidY), ...alongLegZ]),
-    shearZ: largerShearCut([governingShearCut(parts, 'z', region.centroidZ), ...alongLegY]),
     warpingConstant: 0,
     closed: false,
     bendingCombination: 'points',

@@ -15,7 +15,7 @@
  * @example boxProperties({ shape: 'box', width: 0.1, depth: 0.1, wallThickness: 0.005, outerCornerRadius: 0.01 }).torsionConstant // 4.405e-6
  */
 
-import { governingShearCut, plasticModulusAbout, summariseRegion } from './composite-region.js';
+import { outlineValues, summariseRegion } from './composite-region.js';
 import type { BoxDimensions } from './dimensions.js';
 import { filletParts, negated, rectanglePart } from './region-parts.js';
 import type { RegionPart } from './region-parts.js';
@@ -93,18 +93,9 @@ export function boxProperties(dimensions: BoxDimensions): SectionProperties {
     shape: 'box',
     depth: h,
     width: b,
-    area: region.area,
-    centroidY: h / 2,
-    centroidZ: b / 2,
-    secondMomentZ: region.secondMomentZ,
-    secondMomentY: region.secondMomentY,
-    productMoment: 0,
-    plasticModulusZ: plasticModulusAbout(parts, 'z'),
-    plasticModulusY: plasticModulusAbout(parts, 'y'),
+    ...outlineValues(parts, region, { centroidY: h / 2, centroidZ: b / 2 }),
     torsionConstant,
     torsionalShearPerTorque: 1 / torsionalModulus,
-    shearY: governingShearCut(parts, 'y', h / 2),
-    shearZ: governingShearCut(parts, 'z', b / 2),
     warpingConstant: 0,
     closed: true,
     bendingCombination: 'points',

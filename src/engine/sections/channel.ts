@@ -15,14 +15,14 @@
  * @example channelProperties({ shape: 'channel', depth: 0.2, flangeWidth: 0.08, webThickness: 0.006, flangeThickness: 0.011, rootRadius: 0.013 }).area
  */
 
-import { governingShearCut, largerShearCut, plasticModulusAbout, summariseRegion } from './composite-region.js';
+import { outlineValues, summariseRegion } from './composite-region.js';
 import type { ShearCut } from './composite-region.js';
 import type { ChannelDimensions } from './dimensions.js';
 import { cornerJunctionTorsionConstant, plateTorsionConstant, torsionConstantWithinBounds } from './open-section-torsion.js';
 import { filletParts, rectanglePart } from './region-parts.js';
 import type { RegionPart } from './region-parts.js';
 import { assembleSectionProperties } from './section-assembly.js';
-import { requireAtMost, requireBelow, requireNonNegative, requirePositive } from './section-geometry-checks.js';
+import { requireAtMost, requireBelow, requireFlangedDimensions } from './section-geometry-checks.js';
 import type { SectionProperties } from './section-properties.js';
 
 export function channelParts(h: number, b: number, tw: number, tf: number, r: number): RegionPart[] {
@@ -37,11 +37,7 @@ export function channelParts(h: number, b: number, tw: number, tf: number, r: nu
 
 export function channelProperties(dimensions: ChannelDimensions): SectionProperties {
   const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf } = dimensions;
-  requirePositive(h, 'depth');
-  requirePositive(b, 'flangeWidth');
-  requirePositive(tw, 'webThickness');
-  requirePositive(tf, 'flangeThickness');
-  const r = requireNonNegative(dimensions.rootRadius, 'rootRadius');
+  const r = requireFlangedDimensions(dimensions);
   requireBelow(2 * tf, h, 'flangeThickness', 'the depth, for the two flanges');
   requireBelow(tw, b, 'webThickness', 'the flange width');
   requireAtMost(tw + r, b, 'rootRadius', 'the flange width, for the web and a fillet');
@@ -49,7 +45,6 @@ export function channelProperties(dimensions: ChannelDimensions): SectionPropert
 
   const parts = channelParts(h, b, tw, tf, r);
   const region = summariseRegion(parts);
-  const centroidY = h / 2;
   const outstand = b - tw - r;
   // Shear along y also runs along each flange beyond the fillet toe: Q = tf * outstand * (h - tf) / 2.
   const flangeShear: ShearCut[] = outstand > 0 ? [{ firstMoment: (tf * outstand * (h - tf)) / 2, width: tf }] : [];
@@ -68,18 +63,9 @@ export function channelProperties(dimensions: ChannelDimensions): SectionPropert
     shape: 'channel',
     depth: h,
     width: b,
-    area: region.area,
-    centroidY,
-    centroidZ: region.centroidZ,
-    secondMomentZ: region.secondMomentZ,
-    secondMomentY: region.secondMomentY,
-    productMoment: 0,
-    plasticModulusZ: plasticModulusAbout(parts, 'z'),
-    plasticModulusY: plasticModulusAbout(parts, 'y'),
+    ...outlineValues(parts, region, { centroidY: h / 2, shearAlongY: flangeShear }),
     torsionConstant,
     torsionalShearPerTorque: Math.max(tf, tw) / torsionConstant,
-    shearY: largerShearCut([governingShearCut(parts, 'y', centroidY), ...flangeShear]),
-    shearZ: governingShearCut(parts, 'z', region.centroidZ),
     warpingConstant,
     closed: false,
     bendingCombination: 'points',

@@ -6,17 +6,16 @@
 
 import { chordAt, extentAlong, integralsBelow, productMomentAboutOrigin } from './region-parts.js';
 import type { Coordinate, CutIntegrals, RegionPart } from './region-parts.js';
+import type { SectionProperties } from './section-properties.js';
 
-export interface RegionSummary {
-  readonly area: number;
-  /** From the origin of the parts' coordinates. */
-  readonly centroidY: number;
-  readonly centroidZ: number;
-  /** About the centroidal axes, m^4. */
-  readonly secondMomentZ: number;
-  readonly secondMomentY: number;
-  readonly productMoment: number;
-}
+/**
+ * Area, centroid (from the origin of the parts' coordinates) and second moments about the centroidal
+ * axes of a region, m^2 and m^4.
+ */
+export type RegionSummary = Pick<
+  SectionProperties,
+  'area' | 'centroidY' | 'centroidZ' | 'secondMomentZ' | 'secondMomentY' | 'productMoment'
+>;
 
 /** First moment Q about the centroidal axis of the part beyond a cut, and the width the cut crosses. */
 export interface ShearCut {
@@ -188,4 +187,40 @@ export function largerShearCut(cuts: readonly ShearCut[]): ShearCut {
     if (cut.firstMoment / cut.width > best.firstMoment / best.width) best = cut;
   }
   return best;
+}
+
+/** What a section's outline gives: the values of SectionCore that follow from its parts alone. */
+export interface OutlineValues extends RegionSummary {
+  readonly plasticModulusZ: number;
+  readonly plasticModulusY: number;
+  readonly shearY: ShearCut;
+  readonly shearZ: ShearCut;
+}
+
+export interface OutlineSymmetry {
+  /** The horizontal line y = centroidY is an axis of symmetry (exact centroid, product moment 0). */
+  readonly centroidY?: number;
+  /** The vertical line z = centroidZ is an axis of symmetry. */
+  readonly centroidZ?: number;
+  /** Further candidate cuts for shear along y and z, such as along a flange outstand. */
+  readonly shearAlongY?: readonly ShearCut[];
+  readonly shearAlongZ?: readonly ShearCut[];
+}
+
+export function outlineValues(parts: readonly RegionPart[], region: RegionSummary, symmetry: OutlineSymmetry = {}): OutlineValues {
+  const centroidY = symmetry.centroidY ?? region.centroidY;
+  const centroidZ = symmetry.centroidZ ?? region.centroidZ;
+  const symmetric = symmetry.centroidY !== undefined || symmetry.centroidZ !== undefined;
+  return {
+    area: region.area,
+    centroidY,
+    centroidZ,
+    secondMomentZ: region.secondMomentZ,
+    secondMomentY: region.secondMomentY,
+    productMoment: symmetric ? 0 : region.productMoment,
+    plasticModulusZ: plasticModulusAbout(parts, 'z'),
+    plasticModulusY: plasticModulusAbout(parts, 'y'),
+    shearY: largerShearCut([governingShearCut(parts, 'y', centroidY), ...(symmetry.shearAlongY ?? [])]),
+    shearZ: largerShearCut([governingShearCut(parts, 'z', centroidZ), ...(symmetry.shearAlongZ ?? [])]),
+  };
 }

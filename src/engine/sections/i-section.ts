@@ -14,14 +14,14 @@
  * @example iSectionProperties({ shape: 'i-section', depth: 0.2, flangeWidth: 0.1, webThickness: 0.0056, flangeThickness: 0.0085, rootRadius: 0.012 }).area // 2.848e-3 (IPE 200)
  */
 
-import { governingShearCut, largerShearCut, plasticModulusAbout, summariseRegion } from './composite-region.js';
+import { outlineValues, summariseRegion } from './composite-region.js';
 import type { ShearCut } from './composite-region.js';
 import type { ISectionDimensions } from './dimensions.js';
 import { plateTorsionConstant, teeJunctionTorsionConstant, torsionConstantWithinBounds } from './open-section-torsion.js';
 import { filletParts, rectanglePart } from './region-parts.js';
 import type { RegionPart } from './region-parts.js';
 import { assembleSectionProperties } from './section-assembly.js';
-import { requireAtMost, requireBelow, requireNonNegative, requirePositive } from './section-geometry-checks.js';
+import { requireAtMost, requireBelow, requireFlangedDimensions } from './section-geometry-checks.js';
 import type { SectionProperties } from './section-properties.js';
 
 /** The outline from the bottom-left of the bounding box: flanges, web, four root fillets. */
@@ -41,11 +41,7 @@ export function iSectionParts(h: number, b: number, tw: number, tf: number, r: n
 
 export function iSectionProperties(dimensions: ISectionDimensions): SectionProperties {
   const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf } = dimensions;
-  requirePositive(h, 'depth');
-  requirePositive(b, 'flangeWidth');
-  requirePositive(tw, 'webThickness');
-  requirePositive(tf, 'flangeThickness');
-  const r = requireNonNegative(dimensions.rootRadius, 'rootRadius');
+  const r = requireFlangedDimensions(dimensions);
   requireBelow(2 * tf, h, 'flangeThickness', 'the depth, for the two flanges');
   requireBelow(tw, b, 'webThickness', 'the flange width');
   requireAtMost(tw + 2 * r, b, 'rootRadius', 'the flange width, for the web and two fillets');
@@ -53,8 +49,6 @@ export function iSectionProperties(dimensions: ISectionDimensions): SectionPrope
 
   const parts = iSectionParts(h, b, tw, tf, r);
   const region = summariseRegion(parts);
-  const centroidY = h / 2;
-  const centroidZ = b / 2;
   const outstand = (b - tw) / 2 - r;
   // Shear along y also runs along each flange outstand beyond the fillet toe: Q = tf * outstand * (h - tf) / 2.
   const flangeShear: ShearCut[] = outstand > 0 ? [{ firstMoment: (tf * outstand * (h - tf)) / 2, width: tf }] : [];
@@ -68,18 +62,9 @@ export function iSectionProperties(dimensions: ISectionDimensions): SectionPrope
     shape: 'i-section',
     depth: h,
     width: b,
-    area: region.area,
-    centroidY,
-    centroidZ,
-    secondMomentZ: region.secondMomentZ,
-    secondMomentY: region.secondMomentY,
-    productMoment: 0,
-    plasticModulusZ: plasticModulusAbout(parts, 'z'),
-    plasticModulusY: plasticModulusAbout(parts, 'y'),
+    ...outlineValues(parts, region, { centroidY: h / 2, centroidZ: b / 2, shearAlongY: flangeShear }),
     torsionConstant,
     torsionalShearPerTorque: Math.max(tf, tw) / torsionConstant,
-    shearY: largerShearCut([governingShearCut(parts, 'y', centroidY), ...flangeShear]),
-    shearZ: governingShearCut(parts, 'z', centroidZ),
     warpingConstant: (tf * b ** 3 * (h - tf) ** 2) / 24,
     closed: false,
     bendingCombination: 'points',

@@ -11,7 +11,7 @@
 import type { RoundDimensions } from './dimensions.js';
 import { assembleSectionProperties } from './section-assembly.js';
 import { requirePositive } from './section-geometry-checks.js';
-import type { SectionProperties } from './section-properties.js';
+import type { SectionProperties, StressPoint } from './section-properties.js';
 
 export function roundProperties(dimensions: RoundDimensions): SectionProperties {
   const d = dimensions.diameter;
@@ -38,12 +38,18 @@ export function roundProperties(dimensions: RoundDimensions): SectionProperties 
     warpingConstant: 0,
     closed: true,
     bendingCombination: 'resultant',
-    outlinePoints: [
-      { y: d, z: r, label: 'top fibre' },
-      { y: 0, z: r, label: 'bottom fibre' },
-      { y: r, z: d, label: 'fibre at +z' },
-      { y: r, z: 0, label: 'fibre at -z' },
-    ],
+    outlinePoints: circleOutlinePoints(d),
     thickestElement: d,
   });
+}
+
+/** The four extreme fibres of a circle of diameter d, from the bottom-left of its bounding box. */
+export function circleOutlinePoints(d: number): StressPoint[] {
+  const r = d / 2;
+  return [
+    { y: d, z: r, label: 'top fibre' },
+    { y: 0, z: r, label: 'bottom fibre' },
+    { y: r, z: d, label: 'fibre at +z' },
+    { y: r, z: 0, label: 'fibre at -z' },
+  ];
 }

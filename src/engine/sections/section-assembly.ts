@@ -7,33 +7,35 @@
 import { EngineError } from '../engine-error.js';
 import type { ShearCut } from './composite-region.js';
 import { principalAxes } from './principal-axes.js';
-import type { KnownSectionProperties, SectionProperties, SectionShape, StressPoint } from './section-properties.js';
+import type { KnownSectionProperties, SectionProperties, StressPoint } from './section-properties.js';
 
 /** What a shape works out itself. Coordinates are from the bottom-left corner of the bounding box. */
-export interface SectionCore {
-  readonly shape: SectionShape;
-  readonly depth: number;
-  readonly width: number;
-  readonly area: number;
-  readonly centroidY: number;
-  readonly centroidZ: number;
-  readonly secondMomentZ: number;
-  readonly secondMomentY: number;
-  readonly productMoment: number;
-  readonly plasticModulusZ: number;
-  readonly plasticModulusY: number;
-  readonly torsionConstant: number;
-  readonly torsionalShearPerTorque: number;
+export type SectionCore = Pick<
+  SectionProperties,
+  | 'shape'
+  | 'depth'
+  | 'width'
+  | 'area'
+  | 'centroidY'
+  | 'centroidZ'
+  | 'secondMomentZ'
+  | 'secondMomentY'
+  | 'productMoment'
+  | 'plasticModulusZ'
+  | 'plasticModulusY'
+  | 'torsionConstant'
+  | 'torsionalShearPerTorque'
+  | 'warpingConstant'
+  | 'closed'
+  | 'bendingCombination'
+  | 'thickestElement'
+  | 'known'
+> & {
   /** The governing cuts for shear along y and along z. */
   readonly shearY: ShearCut;
   readonly shearZ: ShearCut;
-  readonly warpingConstant: number;
-  readonly closed: boolean;
-  readonly bendingCombination: 'resultant' | 'points';
   /** Outline points where biaxial bending can peak, in bounding-box coordinates. */
   readonly outlinePoints: readonly StressPoint[];
-  readonly thickestElement: number;
-  readonly known?: KnownSectionProperties;
   /** Only where the bounding box and centroid do not give them (custom sections). */
   readonly fibreDistances?: {
     readonly top: number;
@@ -41,7 +43,7 @@ export interface SectionCore {
     readonly positiveZ: number;
     readonly negativeZ: number;
   };
-}
+};
 
 export const ALL_KNOWN: KnownSectionProperties = {
   bendingStressZ: true,

@@ -42,3 +42,18 @@ export function requireAtMost(value: number, limit: number, field: string, what:
     throw impossibleGeometry(field, `${field} (${value}) must not exceed ${what} (${limit}).`, { value, limit });
   }
 }
+
+/** The plates of an I, channel or tee: each dimension positive; returns the root radius (0 if absent). */
+export function requireFlangedDimensions(dimensions: {
+  readonly depth: number;
+  readonly flangeWidth: number;
+  readonly webThickness: number;
+  readonly flangeThickness: number;
+  readonly rootRadius?: number;
+}): number {
+  requirePositive(dimensions.depth, 'depth');
+  requirePositive(dimensions.flangeWidth, 'flangeWidth');
+  requirePositive(dimensions.webThickness, 'webThickness');
+  requirePositive(dimensions.flangeThickness, 'flangeThickness');
+  return requireNonNegative(dimensions.rootRadius, 'rootRadius');
+}

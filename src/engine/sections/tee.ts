@@ -11,7 +11,7 @@
  * @example teeProperties({ shape: 'tee', depth: 0.1, flangeWidth: 0.1, webThickness: 0.01, flangeThickness: 0.01 }).centroidY
  */
 
-import { governingShearCut, largerShearCut, plasticModulusAbout, summariseRegion } from './composite-region.js';
+import { outlineValues, summariseRegion } from './composite-region.js';
 import type { ShearCut } from './composite-region.js';
 import type { TeeDimensions } from './dimensions.js';
 import {
@@ -23,7 +23,7 @@ import {
 import { filletParts, rectanglePart } from './region-parts.js';
 import type { RegionPart } from './region-parts.js';
 import { assembleSectionProperties } from './section-assembly.js';
-import { requireAtMost, requireBelow, requireNonNegative, requirePositive } from './section-geometry-checks.js';
+import { requireAtMost, requireBelow, requireFlangedDimensions } from './section-geometry-checks.js';
 import type { SectionProperties } from './section-properties.js';
 
 export function teeParts(h: number, b: number, tw: number, tf: number, r: number): RegionPart[] {
@@ -39,11 +39,7 @@ export function teeParts(h: number, b: number, tw: number, tf: number, r: number
 
 export function teeProperties(dimensions: TeeDimensions): SectionProperties {
   const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf } = dimensions;
-  requirePositive(h, 'depth');
-  requirePositive(b, 'flangeWidth');
-  requirePositive(tw, 'webThickness');
-  requirePositive(tf, 'flangeThickness');
-  const r = requireNonNegative(dimensions.rootRadius, 'rootRadius');
+  const r = requireFlangedDimensions(dimensions);
   requireBelow(tf, h, 'flangeThickness', 'the depth');
   requireBelow(tw, b, 'webThickness', 'the flange width');
   requireAtMost(tw + 2 * r, b, 'rootRadius', 'the flange width, for the stem and two fillets');
@@ -51,7 +47,6 @@ export function teeProperties(dimensions: TeeDimensions): SectionProperties {
 
   const parts = teeParts(h, b, tw, tf, r);
   const region = summariseRegion(parts);
-  const centroidZ = b / 2;
   const outstand = (b - tw) / 2 - r;
   // Shear along y also runs along each flange outstand beyond the fillet toe.
   const flangeArm = Math.abs(h - tf / 2 - region.centroidY);
@@ -66,18 +61,9 @@ export function teeProperties(dimensions: TeeDimensions): SectionProperties {
     shape: 'tee',
     depth: h,
     width: b,
-    area: region.area,
-    centroidY: region.centroidY,
-    centroidZ,
-    secondMomentZ: region.secondMomentZ,
-    secondMomentY: region.secondMomentY,
-    productMoment: 0,
-    plasticModulusZ: plasticModulusAbout(parts, 'z'),
-    plasticModulusY: plasticModulusAbout(parts, 'y'),
+    ...outlineValues(parts, region, { centroidZ: b / 2, shearAlongY: flangeShear }),
     torsionConstant,
     torsionalShearPerTorque: Math.max(tf, tw) / torsionConstant,
-    shearY: largerShearCut([governingShearCut(parts, 'y', region.centroidY), ...flangeShear]),
-    shearZ: governingShearCut(parts, 'z', centroidZ),
     warpingConstant: 0,
     closed: false,
     bendingCombination: 'points',

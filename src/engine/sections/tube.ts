@@ -11,6 +11,7 @@
  */
 
 import type { TubeDimensions } from './dimensions.js';
+import { circleOutlinePoints } from './round.js';
 import { assembleSectionProperties } from './section-assembly.js';
 import { requireBelow, requirePositive } from './section-geometry-checks.js';
 import type { SectionProperties } from './section-properties.js';
@@ -48,12 +49,7 @@ export function tubeProperties(dimensions: TubeDimensions): SectionProperties {
     warpingConstant: 0,
     closed: true,
     bendingCombination: 'resultant',
-    outlinePoints: [
-      { y: D, z: r, label: 'top fibre' },
-      { y: 0, z: r, label: 'bottom fibre' },
-      { y: r, z: D, label: 'fibre at +z' },
-      { y: r, z: 0, label: 'fibre at -z' },
-    ],
+    outlinePoints: circleOutlinePoints(D),
     thickestElement: t,
   });
 }

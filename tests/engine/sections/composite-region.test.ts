@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   governingShearCut,
   largerShearCut,
+  outlineValues,
   plasticModulusAbout,
   plasticNeutralAxis,
   summariseRegion,
@@ -107,5 +108,28 @@ describe('largerShearCut', () => {
     const first = { firstMoment: 10, width: 2 };
     const second = { firstMoment: 12, width: 3 };
     expect(largerShearCut([second, first])).toBe(first);
+  });
+});
+
+describe('outlineValues', () => {
+  // An L of two 10 x 1 rectangles (heel at the origin): symmetric about neither axis.
+  const parts = [rectanglePart(0, 10, 0, 1), rectanglePart(0, 1, 1, 10)];
+  const region = summariseRegion(parts);
+
+  it('keeps the product moment of an unsymmetric outline and zeroes it on an axis of symmetry', () => {
+    expect(outlineValues(parts, region).productMoment).toBe(region.productMoment);
+    expect(region.productMoment).toBeLessThan(0);
+    const square = [rectanglePart(0, 2, 0, 2)];
+    const values = outlineValues(square, summariseRegion(square), { centroidY: 1, centroidZ: 1 });
+    expect(values.productMoment).toBe(0);
+    expect(values.centroidY).toBe(1);
+    // 2 x 2 square: Wpl = b h^2 / 4 = 2.
+    expect(values.plasticModulusZ).toBeCloseTo(2, 12);
+  });
+
+  it('takes a further shear cut when its Q / b is larger', () => {
+    const further = { firstMoment: 1000, width: 1 };
+    expect(outlineValues(parts, region, { shearAlongY: [further] }).shearY).toBe(further);
+    expect(outlineValues(parts, region, { shearAlongZ: [{ firstMoment: 1e-6, width: 1 }] }).shearZ.firstMoment).toBeGreaterThan(1e-6);
   });
 });

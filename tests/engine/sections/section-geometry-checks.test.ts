@@ -4,6 +4,7 @@ import {
   impossibleGeometry,
   requireAtMost,
   requireBelow,
+  requireFlangedDimensions,
   requireNonNegative,
   requirePositive,
 } from '../../../src/engine/sections/section-geometry-checks.js';
@@ -36,6 +37,13 @@ describe('section geometry checks', () => {
     expect(requireNonNegative(undefined, 'rootRadius')).toBe(0);
     expect(requireNonNegative(0, 'rootRadius')).toBe(0);
     expect(caught(() => requireNonNegative(-0.001, 'rootRadius')).path).toEqual(['section', 'rootRadius']);
+  });
+
+  it('check the plates of a flanged section and give its root radius', () => {
+    const plates = { depth: 0.2, flangeWidth: 0.1, webThickness: 0.0056, flangeThickness: 0.0085 };
+    expect(requireFlangedDimensions(plates)).toBe(0);
+    expect(requireFlangedDimensions({ ...plates, rootRadius: 0.012 })).toBe(0.012);
+    expect(caught(() => requireFlangedDimensions({ ...plates, flangeThickness: 0 })).path).toEqual(['section', 'flangeThickness']);
   });
 
   it('compare strictly or inclusively', () => {

@@ -13,7 +13,9 @@ import type { RouteContract } from './api/route-contract.js';
 import { docsRoutes } from './api/routes/docs.js';
 import { healthContracts, healthRoutes } from './api/routes/health.js';
 import { materialContracts, materialRoutes } from './api/routes/materials.js';
+import { DEFAULT_BATCH_BODY_LIMIT, memberCheckBatchContract, memberCheckBatchRoutes } from './api/routes/member-check-batch.js';
 import { memberCheckContract, memberCheckRoutes } from './api/routes/member-checks.js';
+import { memberSizingContract, memberSizingRoutes } from './api/routes/member-sizing.js';
 import { sectionPropertiesContract, sectionPropertiesRoutes } from './api/routes/section-properties.js';
 import { sectionContracts, sectionRoutes } from './api/routes/sections.js';
 import { loadCatalogues, type LoadedCatalogues } from './api/load-catalogues.js';
@@ -25,6 +27,8 @@ export interface AppOptions {
   readonly companyCataloguePath?: string;
   /** Largest accepted request body, bytes; default 1 MiB. */
   readonly bodyLimit?: number;
+  /** Largest accepted batch body, bytes; default 16 MiB. */
+  readonly batchBodyLimit?: number;
   readonly logger?: FastifyServerOptions['logger'];
 }
 
@@ -32,7 +36,7 @@ export const DEFAULT_BODY_LIMIT = 1024 * 1024;
 
 /** The route contracts, in the order the document lists them. */
 export function routeContracts(): RouteContract[] {
-  return [memberCheckContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts];
+  return [memberCheckContract, memberCheckBatchContract, memberSizingContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts];
 }
 
 const REQUEST_ID = /^[\w.:-]{1,128}$/;
@@ -81,6 +85,8 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     })),
   );
   await app.register(memberCheckRoutes(catalogues));
+  await app.register(memberCheckBatchRoutes(catalogues, options.batchBodyLimit ?? DEFAULT_BATCH_BODY_LIMIT));
+  await app.register(memberSizingRoutes(catalogues));
   await app.register(sectionPropertiesRoutes(catalogues));
   await app.register(sectionRoutes(catalogues));
   await app.register(materialRoutes(catalogues));

@@ -1,5 +1,6 @@
 /** The service process: configuration from the environment, listen, and a graceful shutdown. */
 
+import { DEFAULT_BATCH_BODY_LIMIT } from './api/routes/member-check-batch.js';
 import { buildApp, DEFAULT_BODY_LIMIT } from './app.js';
 
 function positiveInteger(name: string, fallback: number): number {
@@ -14,6 +15,7 @@ async function main(): Promise<void> {
   const app = await buildApp({
     logger: { level: process.env.LOG_LEVEL ?? 'info' },
     bodyLimit: positiveInteger('BODY_LIMIT_BYTES', DEFAULT_BODY_LIMIT),
+    batchBodyLimit: positiveInteger('BATCH_BODY_LIMIT_BYTES', DEFAULT_BATCH_BODY_LIMIT),
     companyCataloguePath: process.env.MEMBERPROOF_CATALOGUES || undefined,
   });
   const port = positiveInteger('PORT', 3000);

@@ -53,10 +53,20 @@ export function shapeDimensions(shape: ShapeInput, reader: QuantityReader, base:
   return converted as unknown as SectionDimensions;
 }
 
+/**
+ * Catalogue entries keep their dimensions object for the life of the process, so their properties are
+ * computed once: sizing checks the same entries again and again.
+ */
+const propertiesByDimensions = new WeakMap<SectionDimensions, SectionProperties>();
+
 /** Properties from dimensions; impossible geometry becomes a 422 naming the field. */
 export function propertiesOf(dimensions: SectionDimensions, base: Path): SectionProperties {
+  const known = propertiesByDimensions.get(dimensions);
+  if (known) return known;
   try {
-    return sectionProperties(dimensions);
+    const properties = sectionProperties(dimensions);
+    propertiesByDimensions.set(dimensions, properties);
+    return properties;
   } catch (error) {
     if (error instanceof EngineError && error.kind === 'impossible-geometry') {
       // The engine names the field as ['section', field]; re-root it where this section sits.

@@ -1,0 +1,86 @@
+/** POST /v1/member-checks/batch */
+
+import type { FastifyInstance } from 'fastify';
+import { SCREENING_CAUTION } from '../../engine/caution.js';
+import { problemFromError } from '../error-handler.js';
+import { assertFinite } from '../finite-guard.js';
+import { runMemberCheck, type Catalogues } from '../member-check.js';
+import { PROBLEMS, ProblemError } from '../problems.js';
+import type { RouteContract } from '../route-contract.js';
+import { BATCH_EXAMPLE, batchEnvelope, batchItem, batchRequest, batchResponse, MAX_BATCH_ITEMS } from '../schemas/batch-exchange.js';
+import type { MemberCheckResponse } from '../schemas/member-check-response.js';
+import { parseBody } from '../validation.js';
+
+export const DEFAULT_BATCH_BODY_LIMIT = 16 * 1024 * 1024;
+
+export const memberCheckBatchContract: RouteContract = {
+  method: 'post',
+  path: '/v1/member-checks/batch',
+  operationId: 'checkMembers',
+  summary: 'Check many members in one request',
+  description: `Up to ${MAX_BATCH_ITEMS} member checks, each answered as the single check would answer it; one bad item never fails the batch. The body may be up to 16 MiB by default.`,
+  tag: 'members',
+  body: batchRequest,
+  response: batchResponse,
+  responseDescription: 'One result per item, in order, and a summary.',
+  problems: ['tooManyItems'],
+  exampleBody: BATCH_EXAMPLE,
+};
+
+type BatchOutcome =
+  | { index: number; id?: string | number; status: 200; result: MemberCheckResponse }
+  | { index: number; id?: string | number; status: number; error: ReturnType<ProblemError['body']> };
+
+function itemId(item: unknown): string | number | undefined {
+  if (item === null || typeof item !== 'object') return undefined;
+  const id = (item as { id?: unknown }).id;
+  return (typeof id === 'string' && id.length <= 128) || (typeof id === 'number' && Number.isInteger(id)) ? id : undefined;
+}
+
+function checkItem(item: unknown, index: number, catalogues: Catalogues, instance: string): BatchOutcome {
+  const id = itemId(item);
+  const withId = id === undefined ? { index } : { index, id };
+  try {
+    const { id: _id, ...body } = parseBody(batchItem, item, ['items', index]);
+    const result = runMemberCheck(body, catalogues, ['items', index]);
+    assertFinite(result);
+    return { ...withId, status: 200, result };
+  } catch (error) {
+    const problem = problemFromError(error);
+    if (!problem) throw error;
+    return { ...withId, status: PROBLEMS[problem.problem].status, error: problem.body(instance) };
+  }
+}
+
+export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number) {
+  return async function register(app: FastifyInstance): Promise<void> {
+    app.post('/v1/member-checks/batch', { bodyLimit }, async (request) => {
+      const { items } = parseBody(batchEnvelope, request.body);
+      if (items.length > MAX_BATCH_ITEMS) {
+        throw new ProblemError('tooManyItems', `The batch holds ${items.length} items; at most ${MAX_BATCH_ITEMS} are accepted.`, [{ pointer: '/items', message: `at most ${MAX_BATCH_ITEMS} items` }]);
+      }
+      const results = items.map((item, index) => checkItem(item, index, catalogues, request.url));
+      let pass = 0;
+      let fail = 0;
+      let worst: { utilization: number; index: number } | undefined;
+      for (const outcome of results) {
+        if (!('result' in outcome)) continue;
+        if (outcome.result.verdict === 'pass') pass++;
+        else fail++;
+        const utilization = outcome.result.governing?.utilization ?? 0;
+        if (worst === undefined || utilization > worst.utilization) worst = { utilization, index: outcome.index };
+      }
+      return {
+        results,
+        summary: {
+          total: results.length,
+          pass,
+          fail,
+          error: results.length - pass - fail,
+          ...(worst === undefined ? {} : { worstUtilization: worst.utilization, worstIndex: worst.index }),
+        },
+        notices: [SCREENING_CAUTION],
+      };
+    });
+  };
+}

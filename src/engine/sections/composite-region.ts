@@ -104,8 +104,9 @@ export function plasticModulusAbout(parts: readonly RegionPart[], axis: 'z' | 'y
 /**
  * The cut for shear along `shear` (a line y = c for shear along y) where Q / b is largest, Q being
  * the first moment about the centroid (at `centroid` along that coordinate) of the part beyond the
- * cut and b the width it crosses. Within each stretch between piece edges the chord is smooth:
- * the stretch is sampled, then the best sample refined by golden-section search.
+ * cut and b the width it crosses. Within each stretch between piece edges the chord is smooth;
+ * where a curved piece spans the stretch it is sampled, then the best sample refined by
+ * golden-section search.
  */
 export function governingShearCut(parts: readonly RegionPart[], shear: Coordinate, centroid: number): ShearCut {
   const whole = totalAlong(parts, shear, Infinity);
@@ -142,6 +143,14 @@ export function governingShearCut(parts: readonly RegionPart[], shear: Coordinat
     if (!(end - start > scale * 1e-12)) continue;
     consider(cutAt(start, 'above'));
     consider(cutAt(end, 'below'));
+    // Where only rectangles span the stretch the chord is constant and Q peaks at the centroid,
+    // so Q / b peaks at an end or at the centroid, both already taken.
+    const curved = parts.some((part) => {
+      if (part.kind !== 'quarter-disc') return false;
+      const [low, high] = extentAlong(part, shear);
+      return low <= start && high >= end;
+    });
+    if (!curved) continue;
     const positions: number[] = [];
     for (let k = 1; k < samples; k += 1) positions.push(start + ((end - start) * k) / samples);
     let bestIndex = 0;
@@ -160,7 +169,7 @@ export function governingShearCut(parts: readonly RegionPart[], shear: Coordinat
     let right = low + golden * (high - low);
     let leftValue = ratio(cutAt(left, 'above'));
     let rightValue = ratio(cutAt(right, 'above'));
-    for (let step = 0; step < 200 && high - low > scale * 1e-13; step += 1) {
+    for (let step = 0; step < 200 && high - low > scale * 1e-10; step += 1) {
       if (leftValue >= rightValue) {
         high = right;
         right = left;

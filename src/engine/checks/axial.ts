@@ -4,7 +4,7 @@ import type { CheckContext, CheckFindings } from './check-context.js';
 import type { FailureCheck, NotApplicableCheck } from './check-outcome.js';
 import { failureCheck } from './failure-check.js';
 
-const UNIFORM_AXIAL_STRESS = 'sigma = N/A, uniform over the section (Shigley 10th ed., ch. 3)';
+const UNIFORM_AXIAL_STRESS = 'sigma = N/A, uniform over the section (Shigley 10th ed., ch. 3, from memory)';
 
 export function axialChecks(context: CheckContext): CheckFindings {
   const { criteria, strengths, input } = context;

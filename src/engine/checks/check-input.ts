@@ -42,7 +42,7 @@ export interface LateralTorsionalInput {
   readonly unbracedLength?: number;
   /** The compression flange is braced continuously: no lateral-torsional buckling. */
   readonly braced?: boolean;
-  /** C1 (Cb). Default: AISC 360-16 eq. F1-1 from the moment diagram of each unbraced length, 1.0 with unbracedLength. */
+  /** C1 (Cb). Default: AISC 360-16 eq. F1-1 (from memory) from the moment diagram of each unbraced length, 1.0 with unbracedLength. */
   readonly momentGradientFactor?: number;
 }
 

@@ -67,7 +67,7 @@ export const DEFAULT_CRITERIA = {
   cantileverDeflectionLimitRatio: 180,
   /** Common practice: 1 degree of twist. */
   allowedTwist: Math.PI / 180,
-  /** Distortion-energy theory, Shigley 10th ed., eq. 5-21. */
+  /** Distortion-energy theory, Shigley 10th ed., eq. 5-21 (from memory). */
   shearYieldRatio: DISTORTION_ENERGY_SHEAR_RATIO,
 } as const;
 

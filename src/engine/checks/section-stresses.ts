@@ -8,8 +8,8 @@
  *   Mz = E (kz Iz + ky Iyz),  My = E (kz Iyz + ky Iy)
  * and solving for the curvatures gives the unsymmetric-bending formula
  *   sigma = N/A - [(Mz Iy - My Iyz) y + (My Iz - Mz Iyz) z] / (Iy Iz - Iyz^2),
- * which is sigma = N/A - Mz y / Iz - My z / Iy when Iyz = 0 (Shigley 10th ed., sec. 3-10, and Roark 8th
- * ed., sec. 8.2 give the symmetric form; the general form is derived above).
+ * which is sigma = N/A - Mz y / Iz - My z / Iy when Iyz = 0 (the symmetric form of Shigley 10th ed.,
+ * sec. 3-10, from memory; the general form is derived above).
  */
 
 import type { SectionProperties, StressPoint } from '../sections/section-properties.js';
@@ -97,8 +97,8 @@ export function normalStresses(section: SectionProperties, forces: SectionForces
 }
 
 /**
- * tau = V Q / (I b) per newton of shear along y and along z, 1/m^2 (Shigley 10th ed., eq. 3-30, the
- * elementary beam-theory value). A section without Q or b falls back to the average 1 / A.
+ * tau = V Q / (I b) per newton of shear along y and along z, 1/m^2 (Shigley 10th ed., eq. 3-30, from
+ * memory: the elementary beam-theory value). A section without Q or b falls back to the average 1 / A.
  */
 export function transverseShearPerForce(section: SectionProperties): {
   readonly alongY: number;

@@ -20,7 +20,7 @@ export interface MaterialStrengths {
 
 /**
  * Shear: ductile, Ssy = shearYieldRatio * Sy (distortion energy gives 1/sqrt(3), Shigley 10th ed.,
- * eq. 5-21); brittle, Sut, since in pure shear (sigma1 = tau, sigma3 = -tau) the modified-Mohr
+ * eq. 5-21, from memory); brittle, Sut, since in pure shear (sigma1 = tau, sigma3 = -tau) the modified-Mohr
  * criterion reduces to tau = Sut (Shigley 10th ed., sec. 5-9, from memory).
  */
 export function materialStrengths(material: Material, shearYieldRatio: number): MaterialStrengths {

@@ -8,7 +8,7 @@ import type { SectionProperties } from '../../engine/sections/section-properties
 import { jsonPointer, ProblemError } from '../problems.js';
 import type { QuantityKind } from '../quantities.js';
 import type { QuantityInput } from '../schemas/quantity.js';
-import type { SectionInput, ShapeInput } from '../schemas/section-input.js';
+import { CUSTOM_DIMENSION_KINDS, type SectionInput, type ShapeInput } from '../schemas/section-input.js';
 import type { SectionLookup } from './catalogue-lookup.js';
 import type { Path, QuantityReader } from './quantity-reader.js';
 
@@ -22,28 +22,16 @@ export interface ResolvedSection {
 /** Radii may be zero; every other dimension must be positive. */
 const MAY_BE_ZERO = new Set(['rootRadius', 'outerCornerRadius']);
 
-const CUSTOM_KINDS: Record<string, QuantityKind> = {
-  area: 'area',
-  secondMomentZ: 'secondMoment',
-  secondMomentY: 'secondMoment',
-  torsionConstant: 'secondMoment',
-  depth: 'length',
-  width: 'length',
-  sectionModulusZ: 'sectionModulus',
-  sectionModulusY: 'sectionModulus',
-  plasticModulusZ: 'sectionModulus',
-  plasticModulusY: 'sectionModulus',
-  warpingConstant: 'warpingConstant',
-  shearAreaY: 'area',
-  shearAreaZ: 'area',
-};
-
 /** The shape's dimensions in SI; quantity errors go to the reader. */
 export function shapeDimensions(shape: ShapeInput, reader: QuantityReader, base: Path): SectionDimensions {
   const converted: Record<string, unknown> = { shape: shape.shape };
   for (const [key, value] of Object.entries(shape)) {
     if (key === 'shape' || value === undefined) continue;
-    const kind = shape.shape === 'custom' ? (CUSTOM_KINDS[key] as QuantityKind) : 'length';
+    if (typeof value === 'boolean') {
+      converted[key] = value;
+      continue;
+    }
+    const kind = shape.shape === 'custom' ? (CUSTOM_DIMENSION_KINDS[key] as QuantityKind) : 'length';
     const path = [...base, key];
     const input = value as QuantityInput;
     converted[key] = MAY_BE_ZERO.has(key) || (shape.shape === 'custom' && key === 'warpingConstant')

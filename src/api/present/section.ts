@@ -3,22 +3,8 @@
 import type { SectionProperties } from '../../engine/sections/section-properties.js';
 import type { ResolvedSection } from '../normalise/section.js';
 import { present, type OutputUnits } from '../output-units.js';
-import type { QuantityKind } from '../quantities.js';
+import { CUSTOM_DIMENSION_KINDS } from '../schemas/section-input.js';
 import { SECTION_PROPERTY_FIELDS } from '../schemas/section-output.js';
-
-const CUSTOM_DIMENSION_KINDS: Record<string, QuantityKind> = {
-  area: 'area',
-  secondMomentZ: 'secondMoment',
-  secondMomentY: 'secondMoment',
-  torsionConstant: 'secondMoment',
-  sectionModulusZ: 'sectionModulus',
-  sectionModulusY: 'sectionModulus',
-  plasticModulusZ: 'sectionModulus',
-  plasticModulusY: 'sectionModulus',
-  warpingConstant: 'warpingConstant',
-  shearAreaY: 'area',
-  shearAreaZ: 'area',
-};
 
 export function presentSectionProperties(properties: SectionProperties, units: OutputUnits, density?: number) {
   const numeric = Object.fromEntries(
@@ -39,9 +25,9 @@ export function presentSectionProperties(properties: SectionProperties, units: O
 }
 
 export function presentSection(section: ResolvedSection, units: OutputUnits, density?: number) {
-  const dimensions: Record<string, string | number> = {};
+  const dimensions: Record<string, string | number | boolean> = {};
   for (const [key, value] of Object.entries(section.dimensions)) {
-    if (typeof value !== 'number') dimensions[key] = value as string;
+    if (typeof value !== 'number') dimensions[key] = value as string | boolean;
     else dimensions[key] = present(units, section.dimensions.shape === 'custom' ? (CUSTOM_DIMENSION_KINDS[key] ?? 'length') : 'length', value);
   }
   const entry = section.entry;

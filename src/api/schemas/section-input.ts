@@ -1,5 +1,6 @@
 /** A section in a request: a catalogue designation, or a shape with its dimensions. */
 
+import type { QuantityKind } from '../quantities.js';
 import { quantity } from './quantity.js';
 import { z } from './zod.js';
 
@@ -88,6 +89,25 @@ const angle = z
   })
   .openapi('AngleSection', { description: 'An equal or unequal angle, heel at the bottom -z corner, legs along +y and +z.' });
 
+/** The kind of each numeric field of a custom section; every other shape's fields are lengths. */
+export const CUSTOM_DIMENSION_KINDS: Record<string, QuantityKind> = {
+  area: 'area',
+  secondMomentZ: 'secondMoment',
+  secondMomentY: 'secondMoment',
+  torsionConstant: 'secondMoment',
+  depth: 'length',
+  width: 'length',
+  sectionModulusZ: 'sectionModulus',
+  sectionModulusY: 'sectionModulus',
+  plasticModulusZ: 'sectionModulus',
+  plasticModulusY: 'sectionModulus',
+  warpingConstant: 'warpingConstant',
+  shearAreaY: 'area',
+  shearAreaZ: 'area',
+  torsionalModulus: 'sectionModulus',
+  thickestElement: 'length',
+};
+
 const custom = z
   .strictObject({
     shape: z.literal('custom'),
@@ -104,6 +124,9 @@ const custom = z
     warpingConstant: quantity('warpingConstant', 'Warping constant Iw.').optional(),
     shearAreaY: quantity('area', 'Shear area for shear along y.').optional(),
     shearAreaZ: quantity('area', 'Shear area for shear along z.').optional(),
+    torsionalModulus: quantity('sectionModulus', 'Torsional modulus Wt: the largest torsional shear stress is T / Wt.').optional(),
+    thickestElement: positiveLength('Thickest plate element: it selects the strength band of a graded steel.').optional(),
+    closed: z.boolean().optional().openapi({ description: 'True for a closed (hollow or solid compact) section, which does not buckle laterally-torsionally.' }),
   })
   .openapi('CustomSection', { description: 'Section properties given directly.' });
 

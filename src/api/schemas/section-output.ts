@@ -65,7 +65,7 @@ export const resolvedSectionOutput = z
     standard: z.string().optional(),
     source: z.string().optional().openapi({ description: 'Where the catalogue data come from.' }),
     nominalMassPerLength: presentedQuantity('massPerLength', 'The catalogue\'s nominal mass per length.').optional(),
-    dimensions: z.record(z.string(), z.union([z.string(), z.number()])).openapi({ description: 'The shape and its dimensions in the response\'s units.' }),
+    dimensions: z.record(z.string(), z.union([z.string(), z.number(), z.boolean()])).openapi({ description: 'The shape and its dimensions in the response\'s units.' }),
     properties: sectionPropertiesOutput,
   })
   .openapi('ResolvedSection');

@@ -1,0 +1,55 @@
+/**
+ * A batch of 1,000 typical checks through the real route (Fastify inject: parsing, checks,
+ * serialisation; no socket), and one single check through the route, for comparison.
+ */
+
+import { Bench } from 'tinybench';
+import { buildApp } from '../src/app.js';
+
+/** Shelf beams of a fictional shelving maker: bay widths, catalogue sections and loads vary. */
+function typicalCheck(i: number) {
+  const length = 1.8 + (i % 10) * 0.3;
+  return {
+    id: `config-${i}`,
+    member: { length: `${length} m`, supports: [{ position: 0, type: 'pinned' }, { position: `${length} m`, type: 'roller' }] },
+    section: { designation: ['IPE 120', 'IPE 140', 'IPE 160', 'HEA 120', 'SHS 100x100x5'][i % 5] },
+    material: { grade: i % 2 === 0 ? 'S355' : 'S275' },
+    loads: [
+      { type: 'distributed', from: 0, to: `${length} m`, qy: `${-2 - (i % 7)} kN/m` },
+      { type: 'point', position: `${length / 3} m`, fy: '-3 kN' },
+    ],
+    selfWeight: true,
+    output: { samples: 11 },
+  };
+}
+
+export async function run(): Promise<string> {
+  const app = await buildApp();
+  const items = Array.from({ length: 1000 }, (_, i) => typicalCheck(i));
+  const batchBody = JSON.stringify({ items });
+  const singleBody = JSON.stringify(typicalCheck(3));
+  const send = async (url: string, payload: string) => {
+    const response = await app.inject({ method: 'POST', url, payload, headers: { 'content-type': 'application/json' } });
+    if (response.statusCode !== 200) throw new Error(`${url}: ${response.statusCode} ${response.body.slice(0, 200)}`);
+    return response;
+  };
+  const sample = await send('/v1/member-checks/batch', batchBody);
+  const bench = new Bench({ time: 4000, warmupTime: 500, iterations: 3 });
+  bench.add('batch of 1,000 checks', async () => {
+    await send('/v1/member-checks/batch', batchBody);
+  });
+  bench.add('one check', async () => {
+    await send('/v1/member-checks', singleBody);
+  });
+  await bench.run();
+  await app.close();
+  const lines = ['| request | mean (ms) | checks per second | body in / out (kB) |', '| --- | ---: | ---: | ---: |'];
+  for (const task of bench.tasks) {
+    const mean = task.result && 'latency' in task.result ? task.result.latency.mean : Number.NaN;
+    const checks = task.name.startsWith('batch') ? 1000 : 1;
+    const sizes = task.name.startsWith('batch') ? `${(batchBody.length / 1024).toFixed(0)} / ${(sample.body.length / 1024).toFixed(0)}` : `${(singleBody.length / 1024).toFixed(1)} / -`;
+    lines.push(`| ${task.name} | ${mean.toFixed(2)} | ${((checks * 1000) / mean).toFixed(0)} | ${sizes} |`);
+  }
+  lines.push(`\nHeap used after the runs: ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(0)} MiB.`);
+  return lines.join('\n');
+}

@@ -6,7 +6,7 @@
  */
 
 import { derivative, evaluatePolynomial, realRootsIn } from './polynomial.js';
-import { DIAGRAM_FIELDS, type DiagramField, type FieldExtremes, type MemberPiece } from './result.js';
+import { DIAGRAM_FIELDS, type DiagramField, type FieldExtremes, type MemberPiece, type Polynomial } from './result.js';
 import { roundedToZero, ZERO_TOLERANCE } from './tolerances.js';
 
 /** Candidate values and positions of one field, in ascending position. */
@@ -55,6 +55,21 @@ function extremesOf(candidates: Candidates): FieldExtremes {
   return { max: extreme(max), min: extreme(min) };
 }
 
+/**
+ * Adds the values of p at the roots of p' inside (0, length). A quadratic p has one candidate, found
+ * directly; higher degrees go through realRootsIn.
+ */
+function pushInteriorStationary(candidates: Candidates, p: Polynomial, start: number, length: number): void {
+  if (p.length < 3) return;
+  if (p.length === 3) {
+    const c2 = p[2] as number;
+    const s = -(p[1] as number) / (2 * c2);
+    if (c2 !== 0 && s > 0 && s < length) candidates.push(evaluatePolynomial(p, s), start + s);
+    return;
+  }
+  for (const s of realRootsIn(derivative(p), 0, length)) candidates.push(evaluatePolynomial(p, s), start + s);
+}
+
 export function fieldExtremes(pieces: readonly MemberPiece[]): Record<DiagramField, FieldExtremes> {
   const result = {} as Record<DiagramField, FieldExtremes>;
   const candidates = new Candidates();
@@ -64,9 +79,7 @@ export function fieldExtremes(pieces: readonly MemberPiece[]): Record<DiagramFie
       const p = piece.fields[field];
       const length = piece.end - piece.start;
       candidates.push(evaluatePolynomial(p, 0), piece.start);
-      if (p.length > 2) {
-        for (const s of realRootsIn(derivative(p), 0, length)) candidates.push(evaluatePolynomial(p, s), piece.start + s);
-      }
+      pushInteriorStationary(candidates, p, piece.start, length);
       candidates.push(evaluatePolynomial(p, length), piece.end);
     }
     result[field] = extremesOf(candidates);

@@ -4,11 +4,15 @@ import type { MemberNodes } from './member-nodes.js';
 import type { DiagramField, MemberPiece, Polynomial } from './result.js';
 import type { MemberSolutions } from './support-reactions.js';
 
+/** The zero polynomial, shared by every piece of a field that vanishes there. */
+const ZERO: Polynomial = Object.freeze([0]);
+
 /** Coefficients [offset, offset + terms) without trailing zeros (at least one kept) and without -0. */
 function polynomialAt(coefficients: Float64Array, piece: number, terms: number): Polynomial {
   const offset = piece * terms;
   let degree = terms - 1;
-  while (degree > 0 && coefficients[offset + degree] === 0) degree--;
+  while (degree >= 0 && coefficients[offset + degree] === 0) degree--;
+  if (degree < 0) return ZERO;
   const p = new Array<number>(degree + 1);
   for (let k = 0; k <= degree; k++) p[k] = (coefficients[offset + k] as number) + 0;
   return p;

@@ -40,20 +40,17 @@ export function scalePolynomial(p: Polynomial, factor: number): number[] {
  * Coefficients without the leading ones whose term is negligible on the interval: |c_k| R^k at or
  * below 1e-14 of the largest term, R = max(|a|, |b|).
  */
-function trimmedOn(p: Polynomial, a: number, b: number): number[] {
+function trimmedOn(p: Polynomial, a: number, b: number): Polynomial {
   const reach = Math.max(Math.abs(a), Math.abs(b));
-  const terms: number[] = [];
   let power = 1;
   let largest = 0;
   for (let k = 0; k < p.length; k++) {
-    const term = Math.abs(p[k] as number) * power;
-    terms.push(term);
-    if (term > largest) largest = term;
+    largest = Math.max(largest, Math.abs(p[k] as number) * power);
     power *= reach;
   }
   let degree = p.length - 1;
-  while (degree >= 0 && (terms[degree] as number) <= 1e-14 * largest) degree--;
-  return p.slice(0, degree + 1);
+  while (degree >= 0 && Math.abs(p[degree] as number) * reach ** degree <= 1e-14 * largest) degree--;
+  return degree === p.length - 1 ? p : p.slice(0, degree + 1);
 }
 
 /**

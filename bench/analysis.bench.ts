@@ -1,0 +1,103 @@
+/**
+ * Engine time of analyseMember: one ordinary check, then growth with the number of spans and with the
+ * number of point loads, per analysis and per node, so that linear growth shows as a flat time per
+ * node. run() returns the table as text.
+ */
+
+import { Bench } from 'tinybench';
+import { analyseMember } from '../src/engine/analysis/analyse-member.js';
+import type { LoadModel, MemberModel, SupportModel } from '../src/engine/member/model.js';
+
+const STIFFNESS = { axial: 4.2e8, bendingZ: 4.2e6, bendingY: 3.15e5, torsional: 5.67e3 };
+const pinned = (position: number): SupportModel => ({
+  position,
+  restraints: { ux: 'rigid', uy: 'rigid', uz: 'rigid', rx: 'rigid', ry: 'free', rz: 'free' },
+});
+const roller = (position: number): SupportModel => ({
+  position,
+  restraints: { ux: 'free', uy: 'rigid', uz: 'rigid', rx: 'free', ry: 'free', rz: 'free' },
+});
+const point = (position: number, fy: number, fz = 0): LoadModel => ({
+  kind: 'point',
+  position,
+  fx: 0,
+  fy,
+  fz,
+  mx: 0,
+  my: 0,
+  mz: 0,
+});
+const uniform = (from: number, to: number, qy: number): LoadModel => ({
+  kind: 'distributed',
+  from,
+  to,
+  qx: [0, 0],
+  qy: [qy, qy],
+  qz: [0, 0],
+  mx: [0, 0],
+});
+
+/** A 6 m shelf beam: uniform load, a point load and a sideways point load. */
+function simpleSpan(): MemberModel {
+  return {
+    length: 6,
+    supports: [pinned(0), roller(6)],
+    hinges: [],
+    loads: [uniform(0, 6, -2e3), point(2.5, -5e3), point(4, 0, 800)],
+    stiffness: STIFFNESS,
+  };
+}
+
+/** n spans of 5 m on n + 1 supports under one uniform load. */
+function continuousBeam(spans: number): MemberModel {
+  const length = 5 * spans;
+  return {
+    length,
+    supports: Array.from({ length: spans + 1 }, (_, i) => (i === 0 ? pinned(0) : roller(5 * i))),
+    hinges: [],
+    loads: [uniform(0, length, -2e3)],
+    stiffness: STIFFNESS,
+  };
+}
+
+/** A 10 m simple span with n equal point loads evenly spread. */
+function manyPointLoads(count: number): MemberModel {
+  return {
+    length: 10,
+    supports: [pinned(0), roller(10)],
+    hinges: [],
+    loads: Array.from({ length: count }, (_, i) => point((10 * (i + 0.5)) / count, -1e3)),
+    stiffness: STIFFNESS,
+  };
+}
+
+interface Row {
+  readonly name: string;
+  readonly nodes: number;
+  readonly milliseconds: number;
+}
+
+async function timeOf(name: string, model: MemberModel): Promise<Row> {
+  const nodes = analyseMember(model).nodes.length;
+  const bench = new Bench({ time: 300, iterations: 5, warmupTime: 50, warmupIterations: 2 });
+  bench.add(name, () => {
+    analyseMember(model);
+  });
+  await bench.run();
+  const result = bench.tasks[0]?.result;
+  if (!result || !('latency' in result)) throw new Error(`benchmark ${name} did not complete`);
+  return { name, nodes, milliseconds: result.latency.mean };
+}
+
+export async function run(): Promise<string> {
+  const rows: Row[] = [await timeOf('simple span, three loads', simpleSpan())];
+  for (const n of [10, 100, 1000, 10000]) rows.push(await timeOf(`continuous beam, ${n} spans`, continuousBeam(n)));
+  for (const n of [10, 100, 1000, 10000]) rows.push(await timeOf(`simple span, ${n} point loads`, manyPointLoads(n)));
+  const header = `${'case'.padEnd(34)}${'nodes'.padStart(8)}${'ms / analysis'.padStart(16)}${'us / node'.padStart(12)}`;
+  const lines = rows.map(
+    (row) =>
+      `${row.name.padEnd(34)}${String(row.nodes).padStart(8)}${row.milliseconds.toFixed(3).padStart(16)}` +
+      `${((1000 * row.milliseconds) / row.nodes).toFixed(2).padStart(12)}`,
+  );
+  return ['analyseMember (engine only)', header, ...lines].join('\n');
+}

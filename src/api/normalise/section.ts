@@ -24,6 +24,15 @@ const MAY_BE_ZERO = new Set(['rootRadius', 'outerCornerRadius']);
 
 /** The shape's dimensions in SI; quantity errors go to the reader. */
 export function shapeDimensions(shape: ShapeInput, reader: QuantityReader, base: Path): SectionDimensions {
+  if (shape.shape === 'custom') {
+    // Without a fibre distance the bending stress is unknown, and no stand-in is safe.
+    if (shape.depth === undefined && shape.sectionModulusZ === undefined) {
+      reader.fail([...base, 'depth'], 'give depth or sectionModulusZ: without a fibre distance the bending stress about z is unknown');
+    }
+    if (shape.width === undefined && shape.sectionModulusY === undefined) {
+      reader.fail([...base, 'width'], 'give width or sectionModulusY: without a fibre distance the bending stress about y is unknown');
+    }
+  }
   const converted: Record<string, unknown> = { shape: shape.shape };
   for (const [key, value] of Object.entries(shape)) {
     if (key === 'shape' || value === undefined) continue;

@@ -5,7 +5,11 @@
  * analyseMember(model) -> MemberAnalysis. Example: a 6 m simple span (pin at 0, roller at 6) under
  * qy = -10 kN/m gives fy = 30 kN at each support and momentZ = 45 kN*m (sagging) at x = 3 m (wL^2/8).
  * Throws EngineError 'outside-member' for a model outside its own length (see validateMemberModel)
- * and 'unstable-member' with details { direction, position } for a loaded mechanism.
+ * and 'unstable-member' with details { direction, position } for a loaded mechanism: a problem
+ * (axial, torsion, either bending plane) that carries load and whose stiffness has a vanishing pivot.
+ * An unloaded problem is not solved and its fields are zero, so rollers alone are fine without
+ * axial load. Reaction components at or below ZERO_TOLERANCE of the equilibrium scales are reported
+ * as 0.
  */
 
 import { EngineError } from '../engine-error.js';

@@ -45,7 +45,7 @@ export interface BarSolution {
 const FORCE_TERMS = 3;
 const DISPLACEMENT_TERMS = 4;
 
-export function emptyBarSolution(nodeCount: number): BarSolution {
+function emptyBarSolution(nodeCount: number): BarSolution {
   const pieces = nodeCount - 1;
   return {
     kind: 'solved',

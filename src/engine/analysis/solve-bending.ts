@@ -59,7 +59,7 @@ const MOMENT_TERMS = 4;
 const SLOPE_TERMS = 5;
 const DEFLECTION_TERMS = 6;
 
-export function emptyBendingSolution(nodeCount: number): BendingSolution {
+function emptyBendingSolution(nodeCount: number): BendingSolution {
   const pieces = nodeCount - 1;
   return {
     kind: 'solved',

@@ -1,14 +1,15 @@
 /** The plain-words notices that go with every check outcome: what the checks assume and leave out. */
 
 import type { KnownSectionProperties } from '../sections/section-properties.js';
+import { SCREENING_CAUTION } from '../caution.js';
 import type { CheckContext } from './check-context.js';
 import type { FailureCheck } from './check-outcome.js';
 import { largestMagnitudeOn } from './critical-positions.js';
 import { columnAxes, eulerLoad } from './column-buckling.js';
 import { productMomentOf, transverseShearPerForce } from './section-stresses.js';
 
-export const CAUTION_NOTICE =
-  'Screening calculation, not a design-code check: verify the design to the governing local code with a licensed engineer.';
+/** The caution every result opens with. */
+export const CAUTION_NOTICE = SCREENING_CAUTION;
 export const EXCLUSIONS_NOTICE =
   'Stress concentrations, fatigue, and connections other than the declared pins are not included.';
 export const COLUMN_NOTICE =

@@ -53,3 +53,22 @@ describe('POST /v1/section-properties', () => {
     expect(response.body.errors[0].pointer).toBe('/section/designation');
   });
 });
+
+describe('custom sections', () => {
+  it('need a fibre distance for each axis, since no stand-in for the bending stress is safe', async () => {
+    const response = await request(app.server)
+      .post('/v1/section-properties')
+      .send({ section: { shape: 'custom', area: '28.5 cm^2', secondMomentZ: '1943 cm^4', secondMomentY: '142 cm^4', torsionConstant: '7 cm^4' } });
+    expect(response.status).toBe(400);
+    expect(response.body.errors.map((e: { pointer: string }) => e.pointer)).toEqual(['/section/depth', '/section/width']);
+  });
+
+  it('take the section moduli from depth and width (IPE 200 values, EN 10365 from memory: Wel = 1943 / 10 = 194.3 cm^3)', async () => {
+    const response = await request(app.server)
+      .post('/v1/section-properties')
+      .send({ section: { shape: 'custom', area: '28.5 cm^2', secondMomentZ: '1943 cm^4', secondMomentY: '142 cm^4', torsionConstant: '7 cm^4', depth: '200 mm', width: '100 mm' } });
+    expect(response.status).toBe(200);
+    expect(response.body.section.properties.sectionModulusZ).toBeCloseTo(194.3e-6, 12);
+    expect(response.body.section.properties.sectionModulusY).toBeCloseTo(28.4e-6, 12);
+  });
+});

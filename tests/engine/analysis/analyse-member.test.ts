@@ -225,6 +225,18 @@ describe('analyseMember: horizontal plane, axial bar and shaft', () => {
     expectClose(b.reactions[0]?.mz as number, -my);
   });
 
+  it('a rotational spring on ry at a cantilever root: my = P L and P L^2 / k more tip deflection', () => {
+    // Sum of moments about the root: my - L fz = 0. The spring turns by ry = -P L / k (dw/dx = -ry),
+    // which swings the tip by P L^2 / k towards +z, the way the load pushes.
+    const k = 3e5;
+    const root = supportAt(0, { ux: 'rigid', uy: 'rigid', uz: 'rigid', rx: 'rigid', ry: { spring: k }, rz: 'rigid' });
+    const a = analyseMember(memberModel(L, [root], [pointLoad(L, { fz: P })]));
+    expectClose(a.reactions[0]?.my as number, P * L);
+    expectClose(a.reactions[0]?.fz as number, -P);
+    expectClose(fieldAt(a, 'deflectionZ', L), (P * L ** 3) / (3 * EIy) + (P * L * L) / k);
+    expectClose(fieldAt(a, 'slopeY', 0), (P * L) / k);
+  });
+
   it('a bar fixed at both ends with an axial load at a: reactions -P(L - a)/L and -Pa/L', () => {
     // Compatibility: N_left a / EA + N_right (L - a) / EA = 0 with N_left - N_right = P.
     const a0 = 2;

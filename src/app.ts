@@ -19,6 +19,7 @@ import { memberSizingContract, memberSizingRoutes } from './api/routes/member-si
 import { sectionPropertiesContract, sectionPropertiesRoutes } from './api/routes/section-properties.js';
 import { sectionContracts, sectionRoutes } from './api/routes/sections.js';
 import { loadCatalogues, type LoadedCatalogues } from './api/load-catalogues.js';
+import { prepareGracefulShutdown } from './graceful-shutdown.js';
 
 export interface AppOptions {
   /** Catalogues already loaded (tests); otherwise the embedded ones plus `companyCataloguePath`. */
@@ -60,6 +61,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   // JSON only: without this Fastify would also take text/plain bodies.
   app.removeContentTypeParser('text/plain');
   registerErrorHandler(app);
+  prepareGracefulShutdown(app);
 
   const routes = new RouteTable();
   routes.watch(app);

@@ -3,22 +3,26 @@
 import { DEFAULT_BATCH_BODY_LIMIT } from './api/routes/member-check-batch.js';
 import { buildApp, DEFAULT_BODY_LIMIT } from './app.js';
 
-function positiveInteger(name: string, fallback: number): number {
+function integerFromEnvironment(name: string, fallback: number, least: number, most = Number.MAX_SAFE_INTEGER): number {
   const raw = process.env[name];
   if (raw === undefined || raw === '') return fallback;
   const value = Number(raw);
-  if (!Number.isInteger(value) || value <= 0) throw new Error(`${name} must be a positive integer, got "${raw}"`);
+  if (!Number.isInteger(value) || value < least || value > most) throw new Error(`${name} must be an integer from ${least} to ${most}, got "${raw}"`);
   return value;
 }
+
+/** How long the requests in flight get after SIGTERM or SIGINT. */
+const SHUTDOWN_GRACE_MS = 30000;
 
 async function main(): Promise<void> {
   const app = await buildApp({
     logger: { level: process.env.LOG_LEVEL ?? 'info' },
-    bodyLimit: positiveInteger('BODY_LIMIT_BYTES', DEFAULT_BODY_LIMIT),
-    batchBodyLimit: positiveInteger('BATCH_BODY_LIMIT_BYTES', DEFAULT_BATCH_BODY_LIMIT),
+    bodyLimit: integerFromEnvironment('BODY_LIMIT_BYTES', DEFAULT_BODY_LIMIT, 1),
+    batchBodyLimit: integerFromEnvironment('BATCH_BODY_LIMIT_BYTES', DEFAULT_BATCH_BODY_LIMIT, 1),
     companyCataloguePath: process.env.MEMBERPROOF_CATALOGUES || undefined,
   });
-  const port = positiveInteger('PORT', 3000);
+  // PORT=0 takes any free port (the tests use it).
+  const port = integerFromEnvironment('PORT', 3000, 0, 65535);
   const host = process.env.HOST ?? '127.0.0.1';
 
   let closing = false;
@@ -26,8 +30,13 @@ async function main(): Promise<void> {
     if (closing) return;
     closing = true;
     app.log.info({ signal }, 'finishing the requests in flight, then exiting');
-    app.close().then(
-      () => process.exit(0),
+    // Leave by letting the event loop drain, so the last responses are flushed; a stuck connection
+    // cannot hold the process longer than the grace period.
+    setTimeout(() => process.exit(1), SHUTDOWN_GRACE_MS).unref();
+    app.closeGracefully().then(
+      () => {
+        process.exitCode = 0;
+      },
       (error: unknown) => {
         app.log.error({ err: error }, 'shutdown failed');
         process.exit(1);

@@ -6,19 +6,19 @@ import { z } from '../schemas/zod.js';
 
 const catalogueSummary = z.object({
   name: z.string().openapi({ description: 'Where the entries come from: "embedded" or a company file path.' }),
-  sections: z.number().int(),
-  materials: z.number().int(),
+  sections: z.number().int().openapi({ description: 'Sections taken from this source.' }),
+  materials: z.number().int().openapi({ description: 'Materials taken from this source.' }),
 });
 
 export const readinessOutput = z
   .object({
-    status: z.enum(['ready', 'loading']),
+    status: z.enum(['ready', 'loading']).openapi({ description: 'ready once every catalogue is loaded (503 while loading).' }),
     catalogues: z.array(catalogueSummary).openapi({ description: 'What was loaded, source by source.' }),
     sectionFamilies: z.record(z.string(), z.number().int()).openapi({ description: 'Number of sections per family.' }),
   })
   .openapi('Readiness');
 
-const livenessOutput = z.object({ status: z.literal('alive') }).openapi('Liveness');
+const livenessOutput = z.object({ status: z.literal('alive').openapi({ description: 'The process answers.' }) }).openapi('Liveness');
 
 export type Readiness = z.infer<typeof readinessOutput>;
 

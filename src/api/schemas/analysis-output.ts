@@ -48,12 +48,15 @@ export const diagramsOutput = z
   .openapi('Diagrams');
 
 const extreme = z.object({
-  value: z.number(),
+  value: z.number().openapi({ description: "The extreme value, in the unit of the diagram's kind (see Diagrams)." }),
   position: presentedQuantity('length', 'Where the value occurs (the first place on a plateau).'),
 });
 
 export const fieldExtremesOutput = z
-  .object({ max: extreme, min: extreme })
+  .object({
+    max: extreme.openapi({ description: 'The largest value and where it occurs.' }),
+    min: extreme.openapi({ description: 'The smallest value and where it occurs.' }),
+  })
   .openapi('FieldExtremes', { description: 'Largest and smallest value of one diagram, found exactly (at nodes, jumps and the roots of the derivative), not from the samples.' });
 
 export const extremesOutput = z

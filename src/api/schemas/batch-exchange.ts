@@ -52,10 +52,10 @@ export const batchResponse = z
     results: z.array(batchResult).openapi({ description: 'One per item, in request order.' }),
     summary: z
       .object({
-        total: z.number().int(),
-        pass: z.number().int(),
-        fail: z.number().int(),
-        error: z.number().int(),
+        total: z.number().int().openapi({ description: 'Items in the batch.' }),
+        pass: z.number().int().openapi({ description: 'Items checked with verdict pass.' }),
+        fail: z.number().int().openapi({ description: 'Items checked with verdict fail.' }),
+        error: z.number().int().openapi({ description: 'Items answered with a problem.' }),
         worstUtilization: z.number().optional().openapi({ description: 'The highest governing utilization among the checked items.' }),
         worstIndex: z.number().int().optional().openapi({ description: 'The item that has it.' }),
       })

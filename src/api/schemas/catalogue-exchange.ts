@@ -31,10 +31,10 @@ export const sectionListQuery = z
 
 const sectionSummary = z
   .object({
-    designation: z.string(),
-    family: z.string(),
-    standard: z.string(),
-    shape: z.string(),
+    designation: z.string().openapi({ description: 'As the standard writes it.' }),
+    family: z.string().openapi({ description: 'The catalogue family.' }),
+    standard: z.string().openapi({ description: 'The standard of the entry.' }),
+    shape: z.string().openapi({ description: 'The section shape.' }),
     depth: presentedQuantity('length', 'Overall depth along y (absent when unknown).').optional(),
     width: presentedQuantity('length', 'Overall width along z (absent when unknown).').optional(),
     massPerLength: presentedQuantity('massPerLength', 'Nominal mass per length.'),
@@ -44,10 +44,10 @@ const sectionSummary = z
 export const sectionListResponse = z
   .object({
     units: unitsEcho,
-    items: z.array(sectionSummary),
+    items: z.array(sectionSummary).openapi({ description: 'This page of matching sections.' }),
     total: z.number().int().openapi({ description: 'Sections matching the filters, before paging.' }),
-    offset: z.number().int(),
-    limit: z.number().int(),
+    offset: z.number().int().openapi({ description: 'Matching sections skipped.' }),
+    limit: z.number().int().openapi({ description: 'Page size.' }),
     families: z.record(z.string(), z.number().int()).openapi({ description: 'Every family in the catalogues, with its number of sections.' }),
     notices,
   })
@@ -84,7 +84,12 @@ export const materialEntryOutput = materialOutput
   .openapi('MaterialEntry');
 
 export const materialListResponse = z
-  .object({ units: unitsEcho, items: z.array(materialEntryOutput), total: z.number().int(), notices })
+  .object({
+    units: unitsEcho,
+    items: z.array(materialEntryOutput).openapi({ description: 'Every grade.' }),
+    total: z.number().int().openapi({ description: 'Number of grades.' }),
+    notices,
+  })
   .openapi('MaterialList');
 
 export const gradeParams = z.strictObject({

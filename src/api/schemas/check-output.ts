@@ -15,7 +15,7 @@ export const failureCheckOutput = z
     safetyFactor: z.number().optional().openapi({ description: 'capacity / demand; absent when the demand is zero.' }),
     requiredSafetyFactor: z.number().openapi({ description: 'The factor the criteria require for this mode.' }),
     utilization: z.number().openapi({ description: 'demand x requiredSafetyFactor / capacity; passes when <= 1; 0 with no demand.' }),
-    passes: z.boolean(),
+    passes: z.boolean().openapi({ description: 'utilization <= 1.' }),
     position: presentedQuantity('length', 'Where along the member the demand peaks; absent for a member-wide check or no demand.').optional(),
     location: z.string().optional().openapi({ description: 'Where on the section, or which part of the member.' }),
     basis: z.string().openapi({ description: 'The formula and its source, in one line.' }),
@@ -44,20 +44,20 @@ const stressExtreme = z.object({
 
 export const checksOutput = {
   checks: z.array(failureCheckOutput).openapi({ description: 'Every applicable failure check.' }),
-  notApplicable: z.array(z.object({ mode, reason: z.string() })).openapi({ description: 'Modes not checked for this member, and why.' }),
+  notApplicable: z.array(z.object({ mode, reason: z.string().openapi({ description: 'Why the mode does not apply to this member.' }) })).openapi({ description: 'Modes not checked for this member, and why.' }),
   governing: z
     .object({
       mode,
-      utilization: z.number(),
-      safetyFactor: z.number(),
+      utilization: z.number().openapi({ description: 'Its utilization: demand x required factor / capacity.' }),
+      safetyFactor: z.number().openapi({ description: 'Its safety factor: capacity / demand.' }),
       position: presentedQuantity('length', 'Where it governs.').optional(),
-      location: z.string().optional(),
+      location: z.string().optional().openapi({ description: 'Where on the section, or which part of the member.' }),
     })
     .optional()
     .openapi({ description: 'The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand.' }),
   verdict: z.enum(['pass', 'fail']).openapi({ description: 'pass when every check passes.' }),
   buckling: z
-    .object({ governing: bucklingAxis, axes: z.array(bucklingAxis) })
+    .object({ governing: bucklingAxis, axes: z.array(bucklingAxis).openapi({ description: 'Every principal axis checked.' }) })
     .openapi('Buckling', { description: 'Column buckling about each principal axis; governing is the axis with the lowest critical load.' }),
   lateralTorsionalBuckling: z
     .object({
@@ -72,23 +72,23 @@ export const checksOutput = {
     .openapi({ description: 'Absent when lateral-torsional buckling does not apply.' }),
   stresses: z
     .object({
-      axialTension: stressExtreme,
-      axialCompression: stressExtreme,
-      bendingTension: stressExtreme,
-      bendingCompression: stressExtreme,
-      transverseShear: stressExtreme,
-      averageShear: stressExtreme,
-      torsionalShear: stressExtreme,
-      equivalent: stressExtreme,
+      axialTension: stressExtreme.openapi({ description: 'Largest N / A in tension.' }),
+      axialCompression: stressExtreme.openapi({ description: 'Largest |N / A| in compression.' }),
+      bendingTension: stressExtreme.openapi({ description: 'Largest fibre stress from bending alone, tension side.' }),
+      bendingCompression: stressExtreme.openapi({ description: 'Largest fibre stress from bending alone, compression side (magnitude).' }),
+      transverseShear: stressExtreme.openapi({ description: 'Largest transverse shear stress V Q / (I b).' }),
+      averageShear: stressExtreme.openapi({ description: 'Largest average shear stress V / A, beside the peak.' }),
+      torsionalShear: stressExtreme.openapi({ description: 'Largest torsional shear stress at the surface.' }),
+      equivalent: stressExtreme.openapi({ description: 'Largest von Mises stress (ductile) or modified-Mohr equivalent (brittle).' }),
     })
     .openapi('Stresses', { description: 'The largest stresses along the member: axial, bending (tension and compression side), transverse shear V Q / (I b) with the average V / A beside it, torsional, and the equivalent (von Mises, or modified Mohr for brittle materials).' }),
   criteria: z
     .object({
-      requiredSafetyFactor: z.record(z.string(), z.number()),
-      deflectionLimitRatio: z.number(),
-      cantileverDeflectionLimitRatio: z.number(),
+      requiredSafetyFactor: z.record(z.string(), z.number()).openapi({ description: "The required safety factor of every mode, and of 'ultimate'." }),
+      deflectionLimitRatio: z.number().openapi({ description: 'Span / allowed deflection.' }),
+      cantileverDeflectionLimitRatio: z.number().openapi({ description: 'Cantilever or overhang length / allowed deflection.' }),
       allowedTwist: presentedQuantity('angle', 'Allowed twist.'),
-      shearYieldRatio: z.number(),
+      shearYieldRatio: z.number().openapi({ description: 'Shear yield strength / tensile yield strength used.' }),
       defaulted: z.array(z.string()).openapi({ description: 'The criteria taken from the defaults, which stand in for the governing code.' }),
     })
     .openapi('CriteriaUsed', { description: 'The criteria used, defaults filled in.' }),

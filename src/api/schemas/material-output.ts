@@ -28,10 +28,10 @@ const numeric = Object.fromEntries(
 
 export const materialOutput = z
   .object({
-    grade: z.string(),
-    standard: z.string(),
+    grade: z.string().openapi({ description: 'The grade ("S355"), or the name given to a material stated in the request.' }),
+    standard: z.string().openapi({ description: 'The standard the grade belongs to.' }),
     ...numeric,
-    behaviour: z.enum(['ductile', 'brittle']),
+    behaviour: z.enum(['ductile', 'brittle']).openapi({ description: 'ductile: von Mises and yield strengths; brittle: modified Mohr and ultimate strengths.' }),
     source: z.string().openapi({ description: 'Where the values come from.' }),
   })
   .openapi('Material');

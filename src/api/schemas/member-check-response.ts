@@ -8,7 +8,11 @@ import { resolvedSectionOutput } from './section-output.js';
 import { z } from './zod.js';
 
 export const unitsEcho = z
-  .object(Object.fromEntries((Object.keys(QUANTITY_KINDS) as QuantityKind[]).map((kind) => [kind, z.string()])) as Record<QuantityKind, z.ZodString>)
+  .object(
+    Object.fromEntries(
+      (Object.keys(QUANTITY_KINDS) as QuantityKind[]).map((kind) => [kind, z.string().openapi({ description: `Unit of every ${kind} value in this response (SI: ${QUANTITY_KINDS[kind]}).` })]),
+    ) as Record<QuantityKind, z.ZodString>,
+  )
   .openapi('Units', { description: 'The unit every kind of quantity in this response is given in.' });
 
 export const notices = z
@@ -18,14 +22,16 @@ export const notices = z
 export const memberCheckResponse = z
   .object({
     units: unitsEcho,
-    member: z.object({
+    member: z
+      .object({
       length: z.number().openapi({ description: 'Member length, in the length unit.' }),
-      nodes: z.array(z.number()).openapi({ description: 'Node positions of the analysis (ends, supports, hinges, point loads, ends of distributed loads), in the length unit.' }),
-    }),
+        nodes: z.array(z.number()).openapi({ description: 'Node positions of the analysis (ends, supports, hinges, point loads, ends of distributed loads), in the length unit.' }),
+      })
+      .openapi({ description: 'The member as analysed.' }),
     section: resolvedSectionOutput,
     material: materialOutput,
     selfWeight: z
-      .object({ applied: z.boolean(), intensity: z.number().openapi({ description: 'Self-weight per length (downward), in the forcePerLength unit; 0 when not applied.' }) })
+      .object({ applied: z.boolean().openapi({ description: 'True when selfWeight was asked for.' }), intensity: z.number().openapi({ description: 'Self-weight per length (downward), in the forcePerLength unit; 0 when not applied.' }) })
       .openapi({ description: 'Whether the member\'s own weight was added.' }),
     reactions: z.array(reactionOutput).openapi({ description: 'One per support, in the order given.' }),
     diagrams: diagramsOutput,

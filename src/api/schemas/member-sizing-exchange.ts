@@ -64,7 +64,7 @@ export const candidateRow = z
   .object({
     rank: z.number().int().openapi({ description: '1 for the selected candidate; passing candidates first, by the objective, then failing ones, closest to passing first.' }),
     designation: z.string().openapi({ description: 'The catalogue designation, or "sections/i" for an explicit shape.' }),
-    family: z.string().optional(),
+    family: z.string().optional().openapi({ description: 'The catalogue family.' }),
     massPerLength: presentedQuantity('massPerLength', 'Nominal mass per length (catalogue), or area x density.'),
     depth: presentedQuantity('length', 'Overall depth along y, when known.').optional(),
     governingMode: z.enum(FAILURE_MODES).optional().openapi({ description: 'The governing failure mode; absent when nothing has any demand or the candidate could not be checked.' }),
@@ -77,13 +77,13 @@ export const candidateRow = z
 export const memberSizingResponse = z
   .object({
     units: unitsEcho,
-    objective: z.enum(SIZING_OBJECTIVES),
+    objective: z.enum(SIZING_OBJECTIVES).openapi({ description: 'The objective used.' }),
     selected: z
-      .object({ designation: z.string(), result: memberCheckResponse })
+      .object({ designation: z.string().openapi({ description: 'The chosen candidate.' }), result: memberCheckResponse })
       .openapi({ description: 'The candidate chosen, with its full member-check result.' }),
     candidates: z.array(candidateRow).openapi({ description: 'Every candidate checked, ranked.' }),
     excluded: z
-      .array(z.object({ designation: z.string(), reason: z.string() }))
+      .array(z.object({ designation: z.string().openapi({ description: 'The candidate left out.' }), reason: z.string().openapi({ description: 'Which limit it is beyond.' }) }))
       .openapi({ description: 'Candidates left out by the limits.' }),
     notices,
   })

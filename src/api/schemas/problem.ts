@@ -13,7 +13,7 @@ export const problemOutput = z
       .array(
         z.object({
           pointer: z.string().openapi({ description: 'RFC 6901 JSON pointer into the request body ("/loads/2/position").' }),
-          message: z.string(),
+          message: z.string().openapi({ description: 'What is wrong with that field.' }),
         }),
       )
       .optional()

@@ -52,7 +52,13 @@ export const sectionPropertiesOutput = z
     closed: z.boolean().openapi({ description: 'A closed section (tube, box, solid): lateral-torsional buckling does not apply.' }),
     bendingCombination: z.enum(['resultant', 'points']).openapi({ description: "'resultant': bending stresses of circles combine as sqrt(My^2 + Mz^2) c / I; 'points': evaluated at each stress point." }),
     stressPoints: z
-      .array(z.object({ y: z.number(), z: z.number(), label: z.string() }))
+      .array(
+        z.object({
+          y: presentedQuantity('length', 'Height of the point above the centroid.'),
+          z: presentedQuantity('length', 'Offset of the point along z from the centroid.'),
+          label: z.string(),
+        }),
+      )
       .openapi({ description: 'Outline points, relative to the centroid (length unit), where the stresses are evaluated.' }),
     massPerLength: presentedQuantity('massPerLength', 'Mass per length from the area and the material density (absent without a density).').optional(),
   })
@@ -61,8 +67,8 @@ export const sectionPropertiesOutput = z
 export const resolvedSectionOutput = z
   .object({
     designation: z.string().optional().openapi({ description: 'The catalogue designation, when the section came from a catalogue.' }),
-    family: z.string().optional(),
-    standard: z.string().optional(),
+    family: z.string().optional().openapi({ description: 'The catalogue family ("IPE", "SHS", "W"...).' }),
+    standard: z.string().optional().openapi({ description: 'The standard the catalogue entry follows.' }),
     source: z.string().optional().openapi({ description: 'Where the catalogue data come from.' }),
     nominalMassPerLength: presentedQuantity('massPerLength', 'The catalogue\'s nominal mass per length.').optional(),
     dimensions: z.record(z.string(), z.union([z.string(), z.number(), z.boolean()])).openapi({ description: 'The shape and its dimensions in the response\'s units.' }),

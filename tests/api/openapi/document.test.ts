@@ -44,7 +44,7 @@ describe('the OpenAPI document', () => {
     expect(docs.text).toMatch(/swagger/i);
   });
 
-  it('describes every field of every request body, following references', () => {
+  it('describes every field of every request and response body, following references', () => {
     const schemas = (generated.components?.schemas ?? {}) as Record<string, unknown>;
     const missing: string[] = [];
     const seen = new Set<unknown>();
@@ -68,9 +68,12 @@ describe('the OpenAPI document', () => {
       }
     };
     for (const [path, item] of Object.entries(generated.paths ?? {})) {
-      for (const operation of Object.values(item as Record<string, { requestBody?: { content: Record<string, { schema: unknown }> } }>)) {
+      type Operation = { requestBody?: { content: Record<string, { schema: unknown }> }; responses: Record<string, { content?: Record<string, { schema: unknown }> }> };
+      for (const operation of Object.values(item as Record<string, Operation>)) {
         const body = operation.requestBody?.content['application/json']?.schema;
-        if (body) visit(body, path);
+        if (body) visit(body, `${path} request`);
+        const answer = operation.responses['200']?.content?.['application/json']?.schema;
+        if (answer) visit(answer, `${path} response`);
       }
     }
     expect(missing).toEqual([]);

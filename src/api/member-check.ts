@@ -12,6 +12,7 @@ import type { MemberCheckOutcome } from '../engine/checks/check-outcome.js';
 import type { CriteriaInput } from '../engine/checks/criteria.js';
 import { EngineError } from '../engine/engine-error.js';
 import type { Material } from '../engine/materials/material.js';
+import { memberStiffness } from '../engine/member/member-stiffness.js';
 import { selfWeightLoad } from '../engine/member/self-weight.js';
 import { STANDARD_GRAVITY, type LoadModel, type MemberModel } from '../engine/member/model.js';
 import type { SectionProperties } from '../engine/sections/section-properties.js';
@@ -88,12 +89,7 @@ export function memberModel(check: NormalisedCheck, section: SectionProperties, 
     supports: check.member.supports,
     hinges: check.member.hinges,
     loads,
-    stiffness: {
-      axial: material.elasticModulus * section.area,
-      bendingZ: material.elasticModulus * section.secondMomentZ,
-      bendingY: material.elasticModulus * section.secondMomentY,
-      torsional: material.shearModulus * section.torsionConstant,
-    },
+    stiffness: memberStiffness(section, material),
   };
 }
 

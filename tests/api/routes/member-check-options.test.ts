@@ -21,7 +21,13 @@ const hanger = {
   loads: [{ type: 'point', position: 1, fy: '-4 kN' }],
 };
 const post = (body: object) => request(app.server).post('/v1/member-checks').send({ ...hanger, ...body });
-const checkOf = (body: { checks: { mode: string }[] }, mode: string) => body.checks.find((check) => check.mode === mode) as Record<string, number>;
+interface CheckAnswer {
+  mode: string;
+  demand: number;
+  capacity: number;
+  utilization: number;
+}
+const checkOf = (body: { checks: CheckAnswer[] }, mode: string) => body.checks.find((check) => check.mode === mode) as CheckAnswer;
 
 describe('criteria', () => {
   it('echoes the defaults used, and says they are defaults', async () => {

@@ -8,12 +8,12 @@
  * with an axial force, a brittle failure criterion) is also searched between them by golden section.
  */
 
-import { addPolynomials, derivative, evaluatePolynomial, realRootsIn, scalePolynomial } from '../analysis/polynomial.js';
+import { derivative, evaluatePolynomial, realRootsIn } from '../analysis/polynomial.js';
 import type { DiagramField, MemberAnalysis, MemberPiece, Polynomial } from '../analysis/result.js';
 import type { SectionProperties } from '../sections/section-properties.js';
-import { squarePolynomial } from './polynomial-products.js';
-import { FORCE_FIELDS, sectionForcesOnPiece, type SectionForces } from './section-forces.js';
-import { bendingStressCoefficients, stressPointsOf, transverseShearPerForce } from './section-stresses.js';
+import { scaledPolynomial, squarePolynomial, sumOfPolynomials } from './polynomial-products.js';
+import { sectionForcesOnPiece, type SectionForces } from './section-forces.js';
+import { sectionStressFactors, type SectionStressFactors } from './section-stress-factors.js';
 
 /** The member with, for each piece, the local coordinates where a stress measure can peak. */
 export interface MemberScan {
@@ -36,52 +36,96 @@ export interface Peak {
   readonly location: string | null;
 }
 
-/** The piece ends and the interior roots of the derivatives of the given polynomials, ascending. */
+/** A polynomial of degree two or more with a non-zero coefficient beyond the linear one: its derivative can have a root. */
+function derivativeCanVanish(p: Polynomial): boolean {
+  for (let i = 2; i < p.length; i++) if ((p[i] as number) !== 0) return true;
+  return false;
+}
+
+/** An earlier polynomial of the list has the same coefficients beyond the constant, hence the same derivative and roots. */
+function derivativeRepeats(polynomials: readonly Polynomial[], index: number): boolean {
+  const p = polynomials[index] as Polynomial;
+  for (let j = 0; j < index; j++) {
+    const q = polynomials[j] as Polynomial;
+    if (q.length !== p.length) continue;
+    let same = true;
+    for (let i = 1; i < p.length && same; i++) same = Object.is(p[i], q[i]);
+    if (same) return true;
+  }
+  return false;
+}
+
+function ascending(a: number, b: number): number {
+  return a - b;
+}
+
+/**
+ * The piece ends and the interior roots of the derivatives of the given polynomials, ascending.
+ * A derivative that is constant has no root, and one met before adds nothing, so neither is solved.
+ */
 export function criticalCoordinates(piece: MemberPiece, polynomials: readonly Polynomial[]): number[] {
   const length = piece.end - piece.start;
   const coordinates = [0, length];
-  for (const p of polynomials) coordinates.push(...realRootsIn(derivative(p), 0, length));
-  coordinates.sort((a, b) => a - b);
-  return coordinates.filter((s, i) => i === 0 || s - (coordinates[i - 1] as number) > 1e-12 * length);
+  for (let index = 0; index < polynomials.length; index++) {
+    const p = polynomials[index] as Polynomial;
+    if (!derivativeCanVanish(p) || derivativeRepeats(polynomials, index)) continue;
+    for (const root of realRootsIn(derivative(p), 0, length)) coordinates.push(root);
+  }
+  coordinates.sort(ascending);
+  const distinct = [coordinates[0] as number];
+  for (let i = 1; i < coordinates.length; i++) {
+    const s = coordinates[i] as number;
+    if (s - (coordinates[i - 1] as number) > 1e-12 * length) distinct.push(s);
+  }
+  return distinct;
 }
 
 /** The polynomial stress measures of a piece whose extremes must be among the critical coordinates. */
 export function stressMeasurePolynomials(piece: MemberPiece, section: SectionProperties): Polynomial[] {
+  return measurePolynomials(piece, sectionStressFactors(section));
+}
+
+function measurePolynomials(piece: MemberPiece, factors: SectionStressFactors): Polynomial[] {
   const { axial, shearY, shearZ, momentZ, momentY, torque } = piece.fields;
-  const polynomials: Polynomial[] = FORCE_FIELDS.map((field) => piece.fields[field]);
-  polynomials.push(addPolynomials(squarePolynomial(momentZ), squarePolynomial(momentY)));
-  polynomials.push(addPolynomials(squarePolynomial(shearY), squarePolynomial(shearZ)));
-  const axialStress = scalePolynomial(axial, 1 / section.area);
-  const torsional = scalePolynomial(torque, section.torsionalShearPerTorque);
-  const torsionalSquaredTimesThree = scalePolynomial(squarePolynomial(torsional), 3);
-  if (section.bendingCombination === 'points') {
-    for (const point of stressPointsOf(section)) {
-      const { perMomentZ, perMomentY } = bendingStressCoefficients(section, point.y, point.z);
-      const normal = addPolynomials(axialStress, scalePolynomial(momentZ, perMomentZ), scalePolynomial(momentY, perMomentY));
-      polynomials.push(normal, addPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree));
-    }
+  const polynomials: Polynomial[] = [axial, shearY, shearZ, momentZ, momentY, torque];
+  polynomials.push(sumOfPolynomials(squarePolynomial(momentZ), squarePolynomial(momentY)));
+  polynomials.push(sumOfPolynomials(squarePolynomial(shearY), squarePolynomial(shearZ)));
+  const axialStress = scaledPolynomial(axial, 1 / factors.area);
+  const torsional = scaledPolynomial(torque, factors.torsionalShearPerTorque);
+  const torsionalSquaredTimesThree = scaledPolynomial(squarePolynomial(torsional), 3);
+  const { perMomentZ, perMomentY } = factors;
+  for (let k = 0; k < perMomentZ.length; k++) {
+    const normal = sumOfPolynomials(
+      axialStress,
+      scaledPolynomial(momentZ, perMomentZ[k] as number),
+      scaledPolynomial(momentY, perMomentY[k] as number),
+    );
+    polynomials.push(normal, sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree));
   }
-  const perForce = transverseShearPerForce(section);
-  for (const transverse of [scalePolynomial(shearY, perForce.alongY), scalePolynomial(shearZ, perForce.alongZ)]) {
-    for (const sign of [1, -1]) {
-      const shear = addPolynomials(torsional, scalePolynomial(transverse, sign));
-      polynomials.push(addPolynomials(squarePolynomial(axialStress), scalePolynomial(squarePolynomial(shear), 3)));
+  const axialStressSquared = squarePolynomial(axialStress);
+  for (const transverse of [scaledPolynomial(shearY, factors.shearPerForceY), scaledPolynomial(shearZ, factors.shearPerForceZ)]) {
+    for (const sign of SIGNS) {
+      const shear = sumOfPolynomials(torsional, scaledPolynomial(transverse, sign));
+      polynomials.push(sumOfPolynomials(axialStressSquared, scaledPolynomial(squarePolynomial(shear), 3)));
     }
   }
   return polynomials;
 }
 
+const SIGNS = [1, -1] as const;
+
 export function scanMember(analysis: MemberAnalysis, section: SectionProperties): MemberScan {
+  const factors = sectionStressFactors(section);
   return {
     analysis,
-    coordinates: analysis.pieces.map((piece) => criticalCoordinates(piece, stressMeasurePolynomials(piece, section))),
+    coordinates: analysis.pieces.map((piece) => criticalCoordinates(piece, measurePolynomials(piece, factors))),
   };
 }
 
 const INVERSE_GOLDEN_RATIO = (Math.sqrt(5) - 1) / 2;
 
 /** Golden-section search for the largest value of f on [a, b]; returns the best point it saw. */
-function goldenSectionMaximum(f: (s: number) => number, a: number, b: number): { s: number; value: number } {
+export function goldenSectionMaximum(f: (s: number) => number, a: number, b: number): { s: number; value: number } {
   let lo = a;
   let hi = b;
   let x1 = hi - INVERSE_GOLDEN_RATIO * (hi - lo);

@@ -1,4 +1,8 @@
-/** Products of the field polynomials, for the squared stress measures whose extremes are roots of a derivative. */
+/**
+ * The polynomial arithmetic of the squared stress measures, whose extremes are roots of a derivative:
+ * products, and sums and multiples formed term for term as analysis/polynomial.ts forms them (the same
+ * numbers), written out so that the scan of every piece makes no closure and no argument list.
+ */
 
 import type { Polynomial } from '../analysis/result.js';
 
@@ -13,4 +17,20 @@ export function multiplyPolynomials(p: Polynomial, q: Polynomial): number[] {
 
 export function squarePolynomial(p: Polynomial): number[] {
   return multiplyPolynomials(p, p);
+}
+
+/** p * factor, coefficient by coefficient (scalePolynomial). */
+export function scaledPolynomial(p: Polynomial, factor: number): number[] {
+  const scaled = new Array<number>(p.length);
+  for (let i = 0; i < p.length; i++) scaled[i] = (p[i] as number) * factor;
+  return scaled;
+}
+
+/** a + b (+ c), each sum started from 0 and taken in that order (addPolynomials). */
+export function sumOfPolynomials(a: Polynomial, b: Polynomial, c: Polynomial = []): number[] {
+  const sum = new Array<number>(Math.max(0, a.length, b.length, c.length)).fill(0);
+  for (let i = 0; i < a.length; i++) sum[i] = (sum[i] as number) + (a[i] as number);
+  for (let i = 0; i < b.length; i++) sum[i] = (sum[i] as number) + (b[i] as number);
+  for (let i = 0; i < c.length; i++) sum[i] = (sum[i] as number) + (c[i] as number);
+  return sum;
 }

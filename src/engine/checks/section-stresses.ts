@@ -96,6 +96,11 @@ export function normalStresses(section: SectionProperties, forces: SectionForces
   return bendingStresses(section, forces).map((stress) => ({ value: axial + stress.value, location: stress.location }));
 }
 
+/** A shear stress per force that the section's Q and b give: finite and positive. */
+function usable(value: number): boolean {
+  return Number.isFinite(value) && value > 0;
+}
+
 /**
  * tau = V Q / (I b) per newton of shear along y and along z, 1/m^2 (Shigley 10th ed., eq. 3-30, from
  * memory: the elementary beam-theory value). A section without Q or b falls back to the average 1 / A.
@@ -107,7 +112,6 @@ export function transverseShearPerForce(section: SectionProperties): {
 } {
   const alongY = section.shearFirstMomentY / (section.secondMomentZ * section.shearWidthY);
   const alongZ = section.shearFirstMomentZ / (section.secondMomentY * section.shearWidthZ);
-  const usable = (value: number) => Number.isFinite(value) && value > 0;
   return {
     alongY: usable(alongY) ? alongY : 1 / section.area,
     alongZ: usable(alongZ) ? alongZ : 1 / section.area,

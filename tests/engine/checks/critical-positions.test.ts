@@ -1,4 +1,7 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { derivative, realRootsIn } from '../../../src/engine/analysis/polynomial.js';
+import type { Polynomial } from '../../../src/engine/analysis/result.js';
 import { criticalCoordinates, largestMagnitudeOn, peakOf, scanMember } from '../../../src/engine/checks/critical-positions.js';
 import { analysisFrom } from './fixtures/analyses.js';
 import { rectangle, round } from './fixtures/sections.js';
@@ -15,6 +18,29 @@ describe('criticalCoordinates', () => {
     expect(coordinates[coordinates.length - 1]).toBe(8);
     expect(coordinates.some((s) => Math.abs(s - 5) < 1e-12)).toBe(true);
     expect(coordinates.some((s) => Math.abs(s - 2) < 1e-6)).toBe(true);
+  });
+
+  it('solves a repeated derivative once: p and p + 7 have the same critical coordinates as p alone', () => {
+    const [piece] = analysisFrom(8, [{ start: 0, end: 8, fields: {} }]).pieces;
+    const p = [0, 10, -1];
+    expect(criticalCoordinates(piece!, [p, [7, 10, -1], [3]])).toStrictEqual(criticalCoordinates(piece!, [p]));
+  });
+
+  it('gives the coordinates of solving every derivative, repeated or constant (property)', () => {
+    // The reference solves each derivative, sorts, and drops a coordinate within 1e-12 L of the one before.
+    const reference = (length: number, polynomials: readonly Polynomial[]) => {
+      const all = [0, length, ...polynomials.flatMap((p) => realRootsIn(derivative(p), 0, length))].sort((a, b) => a - b);
+      return all.filter((s, i) => i === 0 || s - (all[i - 1] as number) > 1e-12 * length);
+    };
+    const polynomial = fc.array(fc.double({ min: -1e3, max: 1e3, noNaN: true }), { minLength: 1, maxLength: 5 });
+    fc.assert(
+      fc.property(fc.array(polynomial, { maxLength: 6 }), fc.double({ min: 0.1, max: 10, noNaN: true }), (distinct, length) => {
+        const polynomials = [...distinct, ...distinct.map((p) => [-(p[0] as number), ...p.slice(1)])];
+        const [piece] = analysisFrom(length, [{ start: 0, end: length, fields: {} }]).pieces;
+        expect(criticalCoordinates(piece!, polynomials)).toStrictEqual(reference(length, polynomials));
+      }),
+      { numRuns: 300 },
+    );
   });
 });
 

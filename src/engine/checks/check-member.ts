@@ -66,13 +66,21 @@ export function checkMember(input: MemberCheckInput): MemberCheckOutcome {
     twistChecks(context),
     pinChecks(context),
   ];
-  const checks: FailureCheck[] = findings.flatMap((finding) => finding.checks);
-  const notApplicable: NotApplicableCheck[] = findings.flatMap((finding) => finding.notApplicable);
+  const checks: FailureCheck[] = [];
+  const notApplicable: NotApplicableCheck[] = [];
+  let passes = true;
+  for (const finding of findings) {
+    for (const check of finding.checks) {
+      checks.push(check);
+      passes &&= check.passes;
+    }
+    for (const reason of finding.notApplicable) notApplicable.push(reason);
+  }
   return {
     checks,
     notApplicable,
     governing: governingFailure(checks),
-    verdict: checks.every((check) => check.passes) ? 'pass' : 'fail',
+    verdict: passes ? 'pass' : 'fail',
     buckling: buckling.summary,
     lateralTorsionalBuckling: lateralTorsional.summary,
     stresses: context.peaks,

@@ -51,11 +51,22 @@ export interface ColumnAxis {
   readonly effectiveLength: number;
 }
 
+/** The buckling, beam-column and notice modules all ask for the axes of one check: work them out once. */
+const axesOfContext = new WeakMap<CheckContext, readonly ColumnAxis[]>();
+
 /**
  * The axes to check, each with its K L. The unbraced length defaults to the member length; the minor
  * axis takes the larger of the two plane factors.
  */
 export function columnAxes(context: CheckContext): ColumnAxis[] {
+  const known = axesOfContext.get(context);
+  if (known !== undefined) return [...known];
+  const axes = axesOf(context);
+  axesOfContext.set(context, axes);
+  return [...axes];
+}
+
+function axesOf(context: CheckContext): ColumnAxis[] {
   const { section, model, buckling = {} } = context.input;
   const unbracedLength = buckling.unbracedLength ?? model.length;
   const aboutZ = resolveEffectiveLengthFactor(buckling, model, 'z');

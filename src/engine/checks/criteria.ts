@@ -85,6 +85,20 @@ export const STRENGTH_MODES_AGAINST_ULTIMATE_WHEN_BRITTLE: readonly FailureMode[
   'beam-column',
 ];
 
+const SAFETY_FACTOR_KEYS: readonly SafetyFactorKey[] = [...FAILURE_MODES, 'ultimate'];
+
+/** The limit the request gives, else the default, noted in `defaulted`. */
+function givenOrDefault(
+  partial: CriteriaInput,
+  key: 'deflectionLimitRatio' | 'cantileverDeflectionLimitRatio' | 'allowedTwist',
+  defaulted: (keyof CriteriaInput)[],
+): number {
+  const value = partial[key];
+  if (value !== undefined) return value;
+  defaulted.push(key);
+  return DEFAULT_CRITERIA[key];
+}
+
 /**
  * Fills the defaults. The material decides two things: its shear yield ratio stands in when the request
  * gives none, and a brittle material's strength checks take the 'ultimate' factor unless the request
@@ -102,7 +116,7 @@ export function resolveCriteria(
   if (given === undefined) defaulted.push('requiredSafetyFactor');
   const required = {} as Record<SafetyFactorKey, number>;
   if (typeof given === 'number') {
-    for (const key of [...FAILURE_MODES, 'ultimate'] as const) {
+    for (const key of SAFETY_FACTOR_KEYS) {
       required[key] = SERVICEABILITY_MODES.includes(key as FailureMode)
         ? DEFAULT_REQUIRED_SAFETY_FACTOR[key]
         : given;
@@ -117,15 +131,9 @@ export function resolveCriteria(
       required[mode] = byMode[mode] ?? (againstUltimate ? required.ultimate : DEFAULT_REQUIRED_SAFETY_FACTOR[mode]);
     }
   }
-  const pick = <K extends 'deflectionLimitRatio' | 'cantileverDeflectionLimitRatio' | 'allowedTwist'>(key: K) => {
-    const value = partial[key];
-    if (value !== undefined) return value;
-    defaulted.push(key);
-    return DEFAULT_CRITERIA[key];
-  };
-  const deflectionLimitRatio = pick('deflectionLimitRatio');
-  const cantileverDeflectionLimitRatio = pick('cantileverDeflectionLimitRatio');
-  const allowedTwist = pick('allowedTwist');
+  const deflectionLimitRatio = givenOrDefault(partial, 'deflectionLimitRatio', defaulted);
+  const cantileverDeflectionLimitRatio = givenOrDefault(partial, 'cantileverDeflectionLimitRatio', defaulted);
+  const allowedTwist = givenOrDefault(partial, 'allowedTwist', defaulted);
   return {
     requiredSafetyFactor: required,
     deflectionLimitRatio,

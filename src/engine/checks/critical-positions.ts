@@ -42,6 +42,18 @@ function derivativeCanVanish(p: Polynomial): boolean {
   return false;
 }
 
+/** The same coefficients, signed zeros told apart. */
+function samePolynomial(p: Polynomial, q: Polynomial): boolean {
+  if (p.length !== q.length) return false;
+  for (let i = 0; i < p.length; i++) if (!Object.is(p[i], q[i])) return false;
+  return true;
+}
+
+function indexOfPolynomial(list: readonly Polynomial[], p: Polynomial): number {
+  for (let i = 0; i < list.length; i++) if (samePolynomial(list[i] as Polynomial, p)) return i;
+  return -1;
+}
+
 /** An earlier polynomial of the list has the same coefficients beyond the constant, hence the same derivative and roots. */
 function derivativeRepeats(polynomials: readonly Polynomial[], index: number): boolean {
   const p = polynomials[index] as Polynomial;
@@ -94,13 +106,20 @@ function measurePolynomials(piece: MemberPiece, factors: SectionStressFactors): 
   const torsional = scaledPolynomial(torque, factors.torsionalShearPerTorque);
   const torsionalSquaredTimesThree = scaledPolynomial(squarePolynomial(torsional), 3);
   const { perMomentZ, perMomentY } = factors;
+  const normals: Polynomial[] = [];
+  const squaredMeasures: Polynomial[] = [];
   for (let k = 0; k < perMomentZ.length; k++) {
     const normal = sumOfPolynomials(
       axialStress,
       scaledPolynomial(momentZ, perMomentZ[k] as number),
       scaledPolynomial(momentY, perMomentY[k] as number),
     );
-    polynomials.push(normal, sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree));
+    // Points on a line of no bending (both flange tips under Mz alone) share their normal stress: square it once.
+    const seen = indexOfPolynomial(normals, normal);
+    const squared = seen >= 0 ? (squaredMeasures[seen] as Polynomial) : sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree);
+    normals.push(normal);
+    squaredMeasures.push(squared);
+    polynomials.push(normal, squared);
   }
   const axialStressSquared = squarePolynomial(axialStress);
   for (const transverse of [scaledPolynomial(shearY, factors.shearPerForceY), scaledPolynomial(shearZ, factors.shearPerForceZ)]) {
@@ -190,7 +209,9 @@ export function largestMagnitudeOn(
     const hi = Math.min(to, piece.end) - piece.start;
     if (hi < lo) continue;
     const p = piece.fields[field];
-    for (const s of [lo, hi, ...realRootsIn(derivative(p), lo, hi)]) {
+    const candidates = [lo, hi];
+    if (derivativeCanVanish(p)) for (const root of realRootsIn(derivative(p), lo, hi)) candidates.push(root);
+    for (const s of candidates) {
       const magnitude = Math.abs(evaluatePolynomial(p, s));
       if (magnitude > value) {
         value = magnitude;

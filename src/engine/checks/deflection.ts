@@ -6,40 +6,47 @@
  * absolute one, so a spring support's own movement counts. The worst segment is reported.
  */
 
-import type { Direction } from '../member/model.js';
+import type { SupportModel } from '../member/model.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
 import { largestMagnitudeOn } from './critical-positions.js';
 import { failureCheck } from './failure-check.js';
 import { rangeLabel } from './labels.js';
-import { segmentsBetweenSupports } from './member-segments.js';
+import { segmentsBetweenSupports, type MemberSegment } from './member-segments.js';
 
-const PLANES: readonly { readonly field: 'deflectionY' | 'deflectionZ'; readonly translation: Direction; readonly axis: string }[] = [
-  { field: 'deflectionY', translation: 'uy', axis: 'y' },
-  { field: 'deflectionZ', translation: 'uz', axis: 'z' },
+const PLANES: readonly {
+  readonly field: 'deflectionY' | 'deflectionZ';
+  readonly axis: string;
+  /** The supports that restrain the plane's translation, rigidly or by a spring. */
+  readonly holds: (support: SupportModel) => boolean;
+}[] = [
+  { field: 'deflectionY', axis: 'y', holds: (support) => support.restraints.uy !== 'free' },
+  { field: 'deflectionZ', axis: 'z', holds: (support) => support.restraints.uz !== 'free' },
 ];
 
 export function deflectionChecks(context: CheckContext): CheckFindings {
   const { model, analysis } = context.input;
   const { criteria } = context;
-  let worst: { demand: number; capacity: number; position: number | null; location: string; ratio: number } | null = null;
+  let worst: {
+    demand: number;
+    capacity: number;
+    position: number | null;
+    segment: MemberSegment;
+    axis: string;
+    ratio: number;
+  } | null = null;
   for (const plane of PLANES) {
-    const segments = segmentsBetweenSupports(model, (support) => support.restraints[plane.translation] !== 'free');
+    const segments = segmentsBetweenSupports(model, plane.holds);
     for (const segment of segments) {
       const ratio = segment.kind === 'span' ? criteria.deflectionLimitRatio : criteria.cantileverDeflectionLimitRatio;
       const capacity = (segment.to - segment.from) / ratio;
       const peak = largestMagnitudeOn(analysis, plane.field, segment.from, segment.to);
       if (worst === null || peak.value / capacity > worst.demand / worst.capacity) {
-        worst = {
-          demand: peak.value,
-          capacity,
-          position: peak.position,
-          location: `${segment.kind} ${rangeLabel(segment.from, segment.to)}, deflection along ${plane.axis}`,
-          ratio,
-        };
+        worst = { demand: peak.value, capacity, position: peak.position, segment, axis: plane.axis, ratio };
       }
     }
   }
   const governing = worst as NonNullable<typeof worst>;
+  const { segment } = governing;
   return {
     checks: [
       failureCheck({
@@ -49,7 +56,7 @@ export function deflectionChecks(context: CheckContext): CheckFindings {
         capacity: governing.capacity,
         requiredSafetyFactor: criteria.requiredSafetyFactor.deflection,
         position: governing.position,
-        location: governing.location,
+        location: `${segment.kind} ${rangeLabel(segment.from, segment.to)}, deflection along ${governing.axis}`,
         basis: `largest |deflection| against length / ${governing.ratio} (limit ratio: common practice or as given)`,
       }),
     ],

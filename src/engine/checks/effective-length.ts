@@ -53,8 +53,14 @@ const isRigid = (restraint: Restraint | undefined) => restraint === 'rigid';
  */
 function endRestraint(supports: readonly SupportModel[], plane: BucklingPlane): EndRestraint {
   const { translation, rotation } = PLANE_DIRECTIONS[plane];
-  if (!supports.some((support) => isRigid(support.restraints[translation]))) return 'free';
-  return supports.some((support) => isRigid(support.restraints[rotation])) ? 'fixed' : 'pinned';
+  let held = false;
+  let fixed = false;
+  for (const support of supports) {
+    held ||= isRigid(support.restraints[translation]);
+    fixed ||= isRigid(support.restraints[rotation]);
+  }
+  if (!held) return 'free';
+  return fixed ? 'fixed' : 'pinned';
 }
 
 /**
@@ -72,19 +78,24 @@ export function effectiveLengthFactorFromSupports(
 ): EffectiveLengthFactor {
   const tolerance = 1e-9 * model.length;
   const { translation } = PLANE_DIRECTIONS[plane];
-  const atStart = model.supports.filter((support) => support.position <= tolerance);
-  const atEnd = model.supports.filter((support) => support.position >= model.length - tolerance);
-  const between = model.supports.filter(
-    (support) =>
-      support.position > tolerance && support.position < model.length - tolerance && isRigid(support.restraints[translation]),
-  );
-  const ends = [endRestraint(atStart, plane), endRestraint(atEnd, plane)].sort() as EndRestraint[];
-  if (between.length > 0) {
-    return ends.includes('free')
+  const atStart: SupportModel[] = [];
+  const atEnd: SupportModel[] = [];
+  let heldBetween = false;
+  for (const support of model.supports) {
+    if (support.position <= tolerance) atStart.push(support);
+    if (support.position >= model.length - tolerance) atEnd.push(support);
+    heldBetween ||=
+      support.position > tolerance && support.position < model.length - tolerance && isRigid(support.restraints[translation]);
+  }
+  const startEnd = endRestraint(atStart, plane);
+  const farEnd = endRestraint(atEnd, plane);
+  if (heldBetween) {
+    return startEnd === 'free' || farEnd === 'free'
       ? { factor: 2.0, basis: 'an overhanging free end beyond intermediate supports: K = 2 over the member length (conservative)' }
       : { factor: 1.0, basis: 'intermediate lateral supports: K = 1 over the member length (conservative)' };
   }
-  const [first, second] = ends as [EndRestraint, EndRestraint];
+  // The pair in alphabetical order, as ENDS_TO_CONDITIONS lists it.
+  const [first, second] = startEnd <= farEnd ? [startEnd, farEnd] : [farEnd, startEnd];
   const endConditions = ENDS_TO_CONDITIONS[`${first}-${second}`];
   if (endConditions === undefined) {
     return { factor: 2.0, basis: `ends ${first} and ${second} form no idealised column: K = 2 assumed, give an effective-length factor` };

@@ -12,23 +12,43 @@ export interface MemberSegment {
   readonly supports: readonly SupportModel[];
 }
 
-/** Without any such support the whole member counts as one span. */
+function ascending(a: number, b: number): number {
+  return a - b;
+}
+
+/** The supports within the tolerance of x. */
+function supportsAt(holding: readonly SupportModel[], x: number, tolerance: number): SupportModel[] {
+  const at: SupportModel[] = [];
+  for (const support of holding) if (Math.abs(support.position - x) <= tolerance) at.push(support);
+  return at;
+}
+
+/**
+ * Without any such support the whole member counts as one span. Support positions closer than the
+ * tolerance to the position before them merge into it.
+ */
 export function segmentsBetweenSupports(model: MemberModel, holds: (support: SupportModel) => boolean): MemberSegment[] {
   const tolerance = 1e-9 * model.length;
-  const holding = model.supports.filter(holds);
-  const positions = [...new Set(holding.map((support) => support.position))].sort((a, b) => a - b);
-  const merged = positions.filter((x, i) => i === 0 || x - (positions[i - 1] as number) > tolerance);
-  const at = (x: number) => holding.filter((support) => Math.abs(support.position - x) <= tolerance);
-  if (merged.length === 0) return [{ from: 0, to: model.length, kind: 'span', supports: [] }];
+  const holding: SupportModel[] = [];
+  for (const support of model.supports) if (holds(support)) holding.push(support);
+  if (holding.length === 0) return [{ from: 0, to: model.length, kind: 'span', supports: [] }];
+  const positions = holding.map((support) => support.position).sort(ascending);
+  const merged = [positions[0] as number];
+  for (let i = 1; i < positions.length; i++) {
+    const x = positions[i] as number;
+    if (x - (positions[i - 1] as number) > tolerance) merged.push(x);
+  }
   const segments: MemberSegment[] = [];
   const first = merged[0] as number;
   const last = merged[merged.length - 1] as number;
-  if (first > tolerance) segments.push({ from: 0, to: first, kind: 'overhang', supports: at(first) });
+  if (first > tolerance) segments.push({ from: 0, to: first, kind: 'overhang', supports: supportsAt(holding, first, tolerance) });
   for (let i = 0; i + 1 < merged.length; i++) {
     const from = merged[i] as number;
     const to = merged[i + 1] as number;
-    segments.push({ from, to, kind: 'span', supports: [...at(from), ...at(to)] });
+    segments.push({ from, to, kind: 'span', supports: [...supportsAt(holding, from, tolerance), ...supportsAt(holding, to, tolerance)] });
   }
-  if (last < model.length - tolerance) segments.push({ from: last, to: model.length, kind: 'overhang', supports: at(last) });
+  if (last < model.length - tolerance) {
+    segments.push({ from: last, to: model.length, kind: 'overhang', supports: supportsAt(holding, last, tolerance) });
+  }
   return segments;
 }

@@ -41,6 +41,8 @@ export const STAND_IN_NOTICES: Readonly<Partial<Record<keyof KnownSectionPropert
   productMoment: 'The given axes are taken as the principal axes (no product moment).',
 };
 
+const STAND_IN_NOTICE_ENTRIES = Object.entries(STAND_IN_NOTICES) as [keyof KnownSectionProperties, string][];
+
 export const NO_DEMAND_NOTICE = 'No load effect anywhere on the member: every utilization is zero.';
 
 const THIN_WALLED_SHAPES = new Set(['i-section', 'channel', 'tee', 'angle', 'box', 'tube']);
@@ -59,8 +61,8 @@ export function memberNotices(context: CheckContext, checks: readonly FailureChe
   if (criteria.defaulted.length > 0) notices.push(defaultsNotice(criteria.defaulted));
   if (input.material.behaviour === 'brittle') notices.push(BRITTLE_NOTICE);
   if (THIN_WALLED_SHAPES.has(section.shape)) notices.push(LOCAL_BUCKLING_NOTICE);
-  for (const [property, notice] of Object.entries(STAND_IN_NOTICES)) {
-    if (section.known?.[property as keyof KnownSectionProperties] === false) notices.push(notice);
+  for (const [property, notice] of STAND_IN_NOTICE_ENTRIES) {
+    if (section.known?.[property] === false) notices.push(notice);
   }
   if (productMomentOf(section) !== 0) notices.push(UNSYMMETRIC_NOTICE);
   if (peaks.transverseShear.value > 0) {

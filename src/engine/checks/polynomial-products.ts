@@ -6,9 +6,16 @@
 
 import type { Polynomial } from '../analysis/result.js';
 
+/** n zeros in a packed array (new Array(n) would leave it holey, slower to read). */
+function zeros(n: number): number[] {
+  const array: number[] = [];
+  for (let i = 0; i < n; i++) array.push(0);
+  return array;
+}
+
 export function multiplyPolynomials(p: Polynomial, q: Polynomial): number[] {
   if (p.length === 0 || q.length === 0) return [];
-  const product = new Array<number>(p.length + q.length - 1).fill(0);
+  const product = zeros(p.length + q.length - 1);
   for (let i = 0; i < p.length; i++) {
     for (let j = 0; j < q.length; j++) product[i + j] = (product[i + j] as number) + (p[i] as number) * (q[j] as number);
   }
@@ -21,14 +28,14 @@ export function squarePolynomial(p: Polynomial): number[] {
 
 /** p * factor, coefficient by coefficient (scalePolynomial). */
 export function scaledPolynomial(p: Polynomial, factor: number): number[] {
-  const scaled = new Array<number>(p.length);
-  for (let i = 0; i < p.length; i++) scaled[i] = (p[i] as number) * factor;
+  const scaled: number[] = [];
+  for (let i = 0; i < p.length; i++) scaled.push((p[i] as number) * factor);
   return scaled;
 }
 
 /** a + b (+ c), each sum started from 0 and taken in that order (addPolynomials). */
 export function sumOfPolynomials(a: Polynomial, b: Polynomial, c: Polynomial = []): number[] {
-  const sum = new Array<number>(Math.max(0, a.length, b.length, c.length)).fill(0);
+  const sum = zeros(Math.max(0, a.length, b.length, c.length));
   for (let i = 0; i < a.length; i++) sum[i] = (sum[i] as number) + (a[i] as number);
   for (let i = 0; i < b.length; i++) sum[i] = (sum[i] as number) + (b[i] as number);
   for (let i = 0; i < c.length; i++) sum[i] = (sum[i] as number) + (c[i] as number);

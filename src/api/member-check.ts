@@ -14,7 +14,7 @@ import { EngineError } from '../engine/engine-error.js';
 import type { Material } from '../engine/materials/material.js';
 import { memberStiffness } from '../engine/member/member-stiffness.js';
 import { selfWeightLoad } from '../engine/member/self-weight.js';
-import { STANDARD_GRAVITY, type LoadModel, type MemberModel } from '../engine/member/model.js';
+import type { LoadModel, MemberModel } from '../engine/member/model.js';
 import type { SectionProperties } from '../engine/sections/section-properties.js';
 import type { MaterialLookup, SectionLookup } from './normalise/catalogue-lookup.js';
 import { normaliseBuckling, normaliseCriteria, normaliseLateralTorsional, normalisePins } from './normalise/check-options.js';
@@ -147,7 +147,7 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
   const { units } = check;
   const { section, material, analysis, outcome } = checked;
   const diagrams = sampleDiagrams(analysis, check.samples);
-  const selfWeightIntensity = check.selfWeight ? material.density * section.properties.area * STANDARD_GRAVITY : 0;
+  const selfWeightIntensity = check.selfWeight ? -selfWeightLoad(section.properties.area, material.density, analysis.length).qy[0] : 0;
   return {
     units: units.names,
     member: { length: present(units, 'length', analysis.length), nodes: analysis.nodes.map((x) => present(units, 'length', x)) },

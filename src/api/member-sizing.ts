@@ -15,7 +15,7 @@ import { propertiesOf, shapeDimensions, unknownDesignation } from './normalise/s
 import { present } from './output-units.js';
 import { invalidField, PROBLEMS, ProblemError } from './problems.js';
 import type { CandidateRow, MemberSizingRequest } from './schemas/member-sizing-exchange.js';
-import { MAX_CANDIDATES } from './schemas/member-sizing-exchange.js';
+import { MAX_CANDIDATES, MAX_SIZING_WORK } from './schemas/member-sizing-exchange.js';
 
 interface Candidate {
   /** Where an explicit shape sits in the request, for its error pointers. */
@@ -91,6 +91,11 @@ export function runMemberSizing(request: MemberSizingRequest, catalogues: Loaded
   }
   // Density does not depend on the thickness band: any band gives it.
   const density = check.material(0.001).material.density;
+  // Each candidate is a whole analysis and check: bound the work one request may ask for.
+  const work = all.length * (check.loads.length + check.member.supports.length + check.member.hinges.length + 1);
+  if (work > MAX_SIZING_WORK) {
+    throw invalidField(['candidates'], `${all.length} candidates x ${check.loads.length} loads is more work than one request may ask (candidates x (loads + supports + hinges + 1) <= ${MAX_SIZING_WORK}); narrow the candidates or the limits`);
+  }
   const excluded: { designation: string; reason: string }[] = [];
   const kept = all.filter((candidate) => {
     const depth = overallDepth(candidate.dimensions);

@@ -8,9 +8,10 @@ import { all, create, type Unit } from 'mathjs';
 const math = create(all as NonNullable<typeof all>);
 // US customary units: mathjs lacks ksi, and its kip is 4448.2216 N, not the exact 1000 lbf
 // (NIST SP 811, 2008, B.8: 1 lbf = 4.4482216152605 N).
-math.createUnit({ kip: { definition: '1000 lbf' } }, { override: true });
-math.createUnit('ksi', '1000 psi');
-math.createUnit('Msi', '1000000 psi');
+// mathjs's psi (6894.75729276459 Pa) is not lbf/in^2 exactly either.
+math.createUnit({ kip: { definition: '1000 lbf' }, psi: { definition: '1 lbf/in^2' } }, { override: true });
+math.createUnit('ksi', '1000 lbf/in^2');
+math.createUnit('Msi', '1000000 lbf/in^2');
 
 /** Each kind of quantity the contract takes or returns, with its SI unit. */
 export const QUANTITY_KINDS = {
@@ -51,6 +52,18 @@ function sameDimension(kind: QuantityKind, unit: Unit): boolean {
   });
 }
 
+/** Magnitudes past this (in SI) are refused: no member of this trade comes near, and squares of them overflow. */
+const MAX_MAGNITUDE = 1e15;
+
+/** The value in the kind's SI unit; undefined when mathjs cannot convert (an angle where none belongs). */
+function convert(unit: Unit, kind: QuantityKind): number | undefined {
+  try {
+    return unit.toNumber(siUnitFor(kind, unit));
+  } catch {
+    return undefined;
+  }
+}
+
 /** The SI unit to convert to; a radian the input leaves out (it is dimensionless) is left out too. */
 function siUnitFor(kind: QuantityKind, unit: Unit): string {
   const si = QUANTITY_KINDS[kind];
@@ -82,22 +95,28 @@ export function quantityToSI(input: number | string, kind: QuantityKind): Quanti
     return { ok: false, message: `"${text}" has no unit; give a number in ${QUANTITY_KINDS[kind]} or a value with a unit` };
   }
   if (!sameDimension(kind, unit)) {
-    return { ok: false, message: `"${text}" is not a ${describeKind(kind)} (expected a unit like ${QUANTITY_KINDS[kind]})` };
+    return { ok: false, message: `"${text}" is not ${describeKind(kind)} (expected a unit like ${QUANTITY_KINDS[kind]})` };
   }
-  const value = unit.toNumber(siUnitFor(kind, unit));
-  return Number.isFinite(value) ? { ok: true, value } : { ok: false, message: `"${text}" is not finite` };
+  const value = convert(unit, kind);
+  if (value === undefined) return { ok: false, message: `"${text}" is not ${describeKind(kind)} (expected a unit like ${QUANTITY_KINDS[kind]})` };
+  if (!Number.isFinite(value)) return { ok: false, message: `"${text}" is not finite` };
+  if (Math.abs(value) > MAX_MAGNITUDE) return { ok: false, message: `"${text}" is beyond the range this service computes with (${MAX_MAGNITUDE} ${QUANTITY_KINDS[kind]})` };
+  return { ok: true, value };
 }
 
 /** How many SI units one of `unitName` is, when `unitName` is a unit of the kind; undefined otherwise. */
 export function unitFactorToSI(unitName: string, kind: QuantityKind): number | undefined {
   let unit: Unit;
   try {
+    // A unit name only: "kN", not "2 kN".
+    if (/^\s*[-+.\d]/.test(unitName)) return undefined;
     unit = math.unit(1, unitName);
   } catch {
     return undefined;
   }
   if (!sameDimension(kind, unit)) return undefined;
-  const factor = unit.toNumber(siUnitFor(kind, unit));
+  const factor = convert(unit, kind);
+  if (factor === undefined) return undefined;
   return Number.isFinite(factor) && factor > 0 ? factor : undefined;
 }
 
@@ -125,6 +144,8 @@ export function example(kind: QuantityKind): string {
   return EXAMPLES[kind];
 }
 
+/** "a length", "an angle": the kind in words, with its article. */
 function describeKind(kind: QuantityKind): string {
-  return kind.replace(/([A-Z])/g, ' $1').toLowerCase();
+  const words = kind.replace(/([A-Z])/g, ' $1').toLowerCase();
+  return `${/^[aeiou]/.test(words) ? 'an' : 'a'} ${words}`;
 }

@@ -81,3 +81,27 @@ describe('unitFactorToSI', () => {
     }
   });
 });
+
+describe('odd units', () => {
+  it('refuses an angle where none belongs, without throwing', () => {
+    expect(quantityToSI('5 N*m*rad', 'moment').ok).toBe(false);
+    expect(quantityToSI('5 N/rad', 'force').ok).toBe(false);
+    const result = quantityToSI('2 m', 'angle');
+    expect(!result.ok && result.message).toMatch(/not an angle/);
+  });
+
+  it('refuses magnitudes past 1e15 in SI', () => {
+    expect(quantityToSI('1e300 Pa', 'stress').ok).toBe(false);
+    expect(quantityToSI(-1e300, 'force').ok).toBe(true);
+  });
+
+  it('takes psi and ksi as exact pounds-force per square inch (NIST SP 811: 1 psi = 6894.757293168 Pa)', () => {
+    const result = quantityToSI('1 psi', 'stress');
+    expect(result.ok && result.value).toBeCloseTo(4.4482216152605 / 0.0254 ** 2, 9);
+  });
+
+  it('does not take a number as an output unit', () => {
+    expect(unitFactorToSI('2 kN', 'force')).toBeUndefined();
+    expect(unitFactorToSI('0 m', 'length')).toBeUndefined();
+  });
+});

@@ -46,8 +46,10 @@ export function normalisePins(supports: readonly SupportInput[], materials: Mate
     const diameter = reader.positive(pin.diameter, 'length', [...path, 'diameter']);
     const plateThickness = reader.positive(pin.plateThickness, 'length', [...path, 'plateThickness']);
     const material = resolveMaterial(pin.material, materials, reader, [...path, 'material']);
+    // A bad diameter is already reported; the material waits for a usable one.
+    if (!(diameter > 0)) return;
     // A pin's thickness band is its diameter (a round bar).
-    pins.push({ support: index, diameter, plateThickness, shearPlanes: pin.shearPlanes, material: Number.isFinite(diameter) ? material(diameter).material : material(0.001).material });
+    pins.push({ support: index, diameter, plateThickness, shearPlanes: pin.shearPlanes, material: material(diameter).material });
   });
   return pins;
 }

@@ -2,9 +2,9 @@
 
 import type { BucklingAxisResult, CheckQuantity, MemberCheckOutcome, StressExtreme } from '../../engine/checks/check-outcome.js';
 import { present, type OutputUnits } from '../output-units.js';
-import type { QuantityKind } from '../quantities.js';
 
-const CHECK_KINDS: Record<CheckQuantity, QuantityKind> = {
+/** The unit kind of each check quantity; it is also the quantity's name in the contract. */
+const CHECK_KINDS: Record<CheckQuantity, 'stress' | 'force' | 'moment' | 'deflection' | 'angle'> = {
   stress: 'stress',
   force: 'force',
   moment: 'moment',
@@ -12,13 +12,6 @@ const CHECK_KINDS: Record<CheckQuantity, QuantityKind> = {
   angle: 'angle',
 };
 
-const CHECK_QUANTITY_NAMES: Record<CheckQuantity, 'stress' | 'force' | 'moment' | 'deflection' | 'angle'> = {
-  stress: 'stress',
-  force: 'force',
-  moment: 'moment',
-  length: 'deflection',
-  angle: 'angle',
-};
 
 function optional<T, U>(value: T | null | undefined, key: string, map: (value: T) => U): Record<string, U> {
   return value === null || value === undefined ? {} : { [key]: map(value) };
@@ -54,7 +47,7 @@ export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits) {
       const kind = CHECK_KINDS[check.quantity];
       return {
         mode: check.mode,
-        quantity: CHECK_QUANTITY_NAMES[check.quantity],
+        quantity: kind,
         demand: present(units, kind, check.demand),
         capacity: present(units, kind, check.capacity),
         ...optional(check.safetyFactor, 'safetyFactor', (v) => v),

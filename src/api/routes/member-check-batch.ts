@@ -9,6 +9,7 @@ import { PROBLEMS, ProblemError } from '../problems.js';
 import type { RouteContract } from '../route-contract.js';
 import { BATCH_EXAMPLE, batchEnvelope, batchItem, batchRequest, batchResponse, MAX_BATCH_ITEMS } from '../schemas/batch-exchange.js';
 import type { MemberCheckResponse } from '../schemas/member-check-response.js';
+import { DEFAULT_SAMPLES } from '../schemas/output-options.js';
 import { parseBody } from '../validation.js';
 
 export const DEFAULT_BATCH_BODY_LIMIT = 16 * 1024 * 1024;
@@ -18,7 +19,7 @@ export const memberCheckBatchContract: RouteContract = {
   path: '/v1/member-checks/batch',
   operationId: 'checkMembers',
   summary: 'Check many members in one request',
-  description: `Up to ${MAX_BATCH_ITEMS} member checks, each answered as the single check would answer it; one bad item never fails the batch. The body may be up to 16 MiB by default.`,
+  description: `Up to ${MAX_BATCH_ITEMS} member checks, each answered as the single check would answer it; one bad item never fails the batch. The body may be up to 16 MiB by default, and the diagrams of all items together up to 200,000 points (413 beyond).`,
   tag: 'members',
   body: batchRequest,
   response: batchResponse,
@@ -30,6 +31,14 @@ export const memberCheckBatchContract: RouteContract = {
 type BatchOutcome =
   | { index: number; id?: string | number; status: 200; result: MemberCheckResponse }
   | { index: number; id?: string | number; status: number; error: ReturnType<ProblemError['body']> };
+
+/** Diagram points over all items bound the size of the answer (each point carries 12 numbers). */
+export const MAX_BATCH_DIAGRAM_POINTS = 200000;
+
+function requestedSamples(item: unknown): number {
+  const samples = (item as { output?: { samples?: unknown } } | null)?.output?.samples;
+  return typeof samples === 'number' && Number.isFinite(samples) ? Math.max(samples, 0) : DEFAULT_SAMPLES;
+}
 
 function itemId(item: unknown): string | number | undefined {
   if (item === null || typeof item !== 'object') return undefined;
@@ -58,6 +67,10 @@ export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number
       const { items } = parseBody(batchEnvelope, request.body);
       if (items.length > MAX_BATCH_ITEMS) {
         throw new ProblemError('tooManyItems', `The batch holds ${items.length} items; at most ${MAX_BATCH_ITEMS} are accepted.`, [{ pointer: '/items', message: `at most ${MAX_BATCH_ITEMS} items` }]);
+      }
+      const points = items.reduce<number>((sum, item) => sum + requestedSamples(item), 0);
+      if (points > MAX_BATCH_DIAGRAM_POINTS) {
+        throw new ProblemError('tooManyItems', `The batch asks for ${points} diagram points in all; at most ${MAX_BATCH_DIAGRAM_POINTS}: lower output.samples.`, [{ pointer: '/items', message: `at most ${MAX_BATCH_DIAGRAM_POINTS} diagram points in all` }]);
       }
       const results = items.map((item, index) => checkItem(item, index, catalogues, request.url));
       let pass = 0;

@@ -6,7 +6,7 @@ import { z } from './zod.js';
 
 export const MAX_SUPPORTS = 1000;
 export const MAX_HINGES = 1000;
-export const MAX_LOADS = 5000;
+export const MAX_LOADS = 1000;
 
 const direction = z.enum(['ux', 'uy', 'uz', 'rx', 'ry', 'rz']).openapi({
   description: 'ux, uy, uz: translations along x, y, z; rx: twist about x; ry, rz: bending rotations about y and z.',

@@ -33,10 +33,10 @@ export const SECTION_PROPERTY_FIELDS: Record<NumericProperty, { kind: QuantityKi
   radiusOfGyrationMinor: { kind: 'length', description: 'Radius of gyration about the minor principal axis.' },
   torsionConstant: { kind: 'secondMoment', description: 'Saint-Venant torsion constant J.' },
   torsionalShearPerTorque: { kind: 'torsionalShearPerTorque', description: 'Largest torsional shear stress per unit torque.' },
-  shearFirstMomentY: { kind: 'sectionModulus', description: 'First moment of area Q at the neutral axis, for shear along y.' },
-  shearWidthY: { kind: 'length', description: 'Width b cut at the neutral axis, for shear along y: largest tau = Vy Q / (Iz b).' },
-  shearFirstMomentZ: { kind: 'sectionModulus', description: 'First moment of area Q at the neutral axis, for shear along z.' },
-  shearWidthZ: { kind: 'length', description: 'Width cut at the neutral axis, for shear along z.' },
+  shearFirstMomentY: { kind: 'sectionModulus', description: 'First moment of area Q at the cut where V Q / (I b) peaks (the neutral axis for most shapes), for shear along y.' },
+  shearWidthY: { kind: 'length', description: 'Width b at that cut, for shear along y: largest tau = Vy Q / (Iz b).' },
+  shearFirstMomentZ: { kind: 'sectionModulus', description: 'First moment of area Q at the cut where V Q / (I b) peaks, for shear along z.' },
+  shearWidthZ: { kind: 'length', description: 'Width at that cut, for shear along z.' },
   warpingConstant: { kind: 'warpingConstant', description: 'Warping constant Iw; 0 where negligible.' },
   thickestElement: { kind: 'length', description: 'Thickest plate element; it selects the yield strength band of a graded steel.' },
 };
@@ -49,7 +49,7 @@ export const sectionPropertiesOutput = z
   .object({
     shape: z.enum(['rectangle', 'round', 'tube', 'box', 'i-section', 'channel', 'tee', 'angle', 'custom']),
     ...propertyShape,
-    closed: z.boolean().openapi({ description: 'A closed section (tube, box, solid): lateral-torsional buckling does not apply.' }),
+    closed: z.boolean().openapi({ description: 'A closed section (round, tube, box): lateral-torsional buckling does not apply. A rectangle is not closed: a deep flat bar can buckle laterally.' }),
     bendingCombination: z.enum(['resultant', 'points']).openapi({ description: "'resultant': bending stresses of circles combine as sqrt(My^2 + Mz^2) c / I; 'points': evaluated at each stress point." }),
     stressPoints: z
       .array(

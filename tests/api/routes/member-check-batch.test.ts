@@ -67,6 +67,13 @@ describe('POST /v1/member-checks/batch', () => {
     expect(response.body.type).toBe(PROBLEMS.tooManyItems.type);
   });
 
+  it('refuses a batch whose diagrams would exceed 200,000 points in all, before any work', async () => {
+    const items = Array.from({ length: 30 }, () => ({ ...bay(2.7), output: { samples: 10001 } }));
+    const response = await request(app.server).post('/v1/member-checks/batch').send({ items });
+    expect(response.status).toBe(413);
+    expect(response.body.detail).toMatch(/300030 diagram points/);
+  });
+
   it('refuses an empty or malformed envelope with a 400', async () => {
     const empty = await request(app.server).post('/v1/member-checks/batch').send({ items: [] });
     expect(empty.status).toBe(400);

@@ -124,3 +124,13 @@ describe('lateral-torsional buckling', () => {
     expect(response.body.lateralTorsionalBuckling.momentGradientFactor).toBe(1);
   });
 });
+
+describe('pin errors', () => {
+  it('name a zero diameter as the diameter', async () => {
+    const response = await post({
+      member: { length: 2, supports: [{ position: 0, type: 'pinned', pin: { diameter: 0, material: { grade: 'S355' }, shearPlanes: 1, plateThickness: 0.01 } }, { position: 2, type: 'roller' }] },
+    });
+    expect(response.status).toBe(400);
+    expect(response.body.errors.map((e: { pointer: string }) => e.pointer)).toEqual(['/member/supports/0/pin/diameter']);
+  });
+});

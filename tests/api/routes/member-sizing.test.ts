@@ -103,6 +103,13 @@ describe('POST /v1/member-sizing', () => {
     expect(designation.body.errors[0].pointer).toBe('/candidates/designations/1');
   });
 
+  it('refuses more work than one request may ask (candidates x loads), naming the candidates', async () => {
+    const loads = Array.from({ length: 200 }, (_, i) => ({ type: 'point', position: 0.01 * (i + 1), fy: -10 }));
+    const response = await size({ candidates: { families: ['IPE', 'HEA', 'HEB', 'W'] }, loads });
+    expect(response.status).toBe(400);
+    expect(response.body.errors[0].pointer).toBe('/candidates');
+  });
+
   it('answers an unstable member as such, not as a failed sizing', async () => {
     const response = await size({ candidates: { family: 'IPE' }, member: { length: '3 m', supports: [{ position: 0, type: 'pinned' }] } });
     expect(response.status).toBe(422);

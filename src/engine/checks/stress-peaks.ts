@@ -6,7 +6,8 @@
  * Each measure is the one of section-stresses.ts and equivalent-stress.ts, taken as peakOf takes it
  * (the first position, in member order, where the largest value occurs; the first point of the
  * section there). All of them are read in one pass over the critical positions, from the section's
- * factors worked out once, with no objects made per position.
+ * factors worked out once, with no objects made per position. The search between positions skips a
+ * stretch that an upper bound shows to lie below the peak already found there (equivalent-stress-bound.ts).
  */
 
 import { evaluatePolynomial } from '../analysis/polynomial.js';
@@ -15,6 +16,7 @@ import type { Material } from '../materials/material.js';
 import type { MemberCheckInput } from './check-input.js';
 import type { StressExtreme, StressSummary } from './check-outcome.js';
 import { goldenSectionMaximum, type MemberScan } from './critical-positions.js';
+import { equivalentStressBound } from './equivalent-stress-bound.js';
 import { modifiedMohrEquivalentStress, vonMisesStress } from './equivalent-stress.js';
 import { fibreBendingStresses, fibreCount, sectionStressFactors, type SectionStressFactors } from './section-stress-factors.js';
 
@@ -191,17 +193,35 @@ class StressMeasures {
   }
 }
 
+/** A stretch is passed over when its bound, enlarged by this for the rounding of the stresses, is below the peak. */
+const BOUND_ROUNDING_ALLOWANCE = 1e-9;
+
+/** The largest equivalent stress at the critical positions themselves. */
+function equivalentPeakAtCoordinates(measures: StressMeasures, scan: MemberScan): number {
+  let peak = 0;
+  scan.analysis.pieces.forEach((piece, index) => {
+    for (const s of scan.coordinates[index] ?? []) peak = Math.max(peak, measures.equivalentAt(piece, s));
+  });
+  return peak;
+}
+
 export function stressPeaks(input: MemberCheckInput, scan: MemberScan): StressSummary {
   const { section, material } = input;
-  const measures = new StressMeasures(sectionStressFactors(section), material);
+  const factors = sectionStressFactors(section);
+  const measures = new StressMeasures(factors, material);
   const refineEquivalent = section.bendingCombination === 'resultant' || material.behaviour === 'brittle';
+  // A stretch whose bound lies below this peak cannot hold the largest value: its search is skipped.
+  const reached = refineEquivalent ? equivalentPeakAtCoordinates(measures, scan) : 0;
   scan.analysis.pieces.forEach((piece, index) => {
     const coordinates = scan.coordinates[index] ?? [];
     for (const s of coordinates) measures.offerAll(piece, s);
     if (!refineEquivalent) return;
     const equivalentAt = (t: number) => measures.equivalentAt(piece, t);
     for (let i = 0; i + 1 < coordinates.length; i++) {
-      const { s } = goldenSectionMaximum(equivalentAt, coordinates[i] as number, coordinates[i + 1] as number);
+      const from = coordinates[i] as number;
+      const to = coordinates[i + 1] as number;
+      if (equivalentStressBound(factors, material, piece, from, to) * (1 + BOUND_ROUNDING_ALLOWANCE) < reached) continue;
+      const { s } = goldenSectionMaximum(equivalentAt, from, to);
       measures.offerEquivalent(piece, s);
     }
   });

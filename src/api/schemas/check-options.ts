@@ -33,7 +33,7 @@ export const criteriaInput = z
 
 export const bucklingInput = z
   .strictObject({
-    effectiveLengthFactor: factor('Effective-length factor K for both axes.').optional(),
+    effectiveLengthFactor: factor('Effective-length factor K for both axes. Required for a member in compression whose K cannot be read from its supports (internal hinges, a translational spring, an end nothing holds): the answer is then a 422 naming this field.').optional(),
     effectiveLengthFactorY: factor('K for buckling about y (deflecting along z); overrides effectiveLengthFactor.').optional(),
     effectiveLengthFactorZ: factor('K for buckling about z (deflecting along y); overrides effectiveLengthFactor.').optional(),
     endConditions: z
@@ -42,7 +42,7 @@ export const bucklingInput = z
       .openapi({ description: 'Idealised column ends when no K is given: theoretical K = 0.5, 0.7, 1.0, 2.0; without it the ends are read from the supports.' }),
     recommendedDesignValues: z.boolean().optional().openapi({ description: 'Use the recommended design K values 0.65, 0.80, 1.0, 2.1 (AISC Specification commentary, Table C-A-7.1) for endConditions.' }),
     unbracedLength: quantity('length', 'Length between points that restrain lateral translation; default the member length.').optional(),
-    amplification: z.boolean().optional().openapi({ description: 'Also check axial plus bending with the moments amplified by 1 / (1 - P / P_cr).' }),
+    amplification: z.boolean().optional().openapi({ description: 'Check axial compression plus bending with the moments amplified by 1 / (1 - P / P_cr) (the beam-column check); on by default, false switches it off.' }),
     eccentricity: quantity('length', 'Eccentricity of the axial load: adds the secant-formula check (Shigley).').optional(),
   })
   .openapi('BucklingOptions', { description: 'Column buckling: effective length and beam-column options.' });

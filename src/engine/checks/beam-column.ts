@@ -165,8 +165,8 @@ export function beamColumnChecks(context: CheckContext, compression: Peak): Chec
   const axes = columnAxes(context);
   const force = compression.value * context.input.section.area;
   const noCompression = axes.some((axis) => safetyRatio(eulerLoad(context, axis), force) === null);
-  if (!buckling.amplification) {
-    notApplicable.push({ mode: 'beam-column', reason: 'moment amplification not requested (buckling.amplification)' });
+  if (buckling.amplification === false) {
+    notApplicable.push({ mode: 'beam-column', reason: 'moment amplification switched off (buckling.amplification: false)' });
   } else if (noCompression) {
     notApplicable.push({ mode: 'beam-column', reason: 'no compressive axial force anywhere along the member' });
   } else {

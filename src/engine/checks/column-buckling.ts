@@ -4,6 +4,7 @@
  * for a brittle material).
  */
 
+import { EngineError } from '../engine-error.js';
 import type { SectionProperties } from '../sections/section-properties.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
 import type { BucklingAxis, BucklingAxisResult, BucklingRegime, BucklingSummary } from './check-outcome.js';
@@ -102,6 +103,15 @@ export function columnBuckling(
     return { axis, slendernessRatio, regime, stress, criticalLoad: stress * section.area };
   });
   const compressed = columns.every((column) => safetyRatio(column.criticalLoad, compressiveForce) !== null);
+  const undetermined = columns.find((column) => column.axis.effectiveLengthFactor.undetermined !== undefined);
+  if (compressed && undetermined) {
+    throw new EngineError(
+      'not-applicable',
+      `The member is in compression and ${undetermined.axis.effectiveLengthFactor.undetermined}, so its effective length cannot be read from the supports: give buckling.effectiveLengthFactor (or per axis).`,
+      ['buckling', 'effectiveLengthFactor'],
+      { axis: undetermined.axis.axis },
+    );
+  }
   const axes: BucklingAxisResult[] = columns.map((column) => ({
     axis: column.axis.axis,
     regime: compressed ? column.regime : 'none',

@@ -41,6 +41,11 @@ export interface EffectiveLengthFactor {
   readonly factor: number;
   /** How it was chosen, for a notice. */
   readonly basis: string;
+  /**
+   * Why no safe K can be read from the supports (hinges, a spring across the plane, an end that
+   * nothing holds): a compressed member then needs a K given in the request.
+   */
+  readonly undetermined?: string;
 }
 
 type EndRestraint = 'fixed' | 'pinned' | 'free';
@@ -48,8 +53,7 @@ type EndRestraint = 'fixed' | 'pinned' | 'free';
 const isRigid = (restraint: Restraint | undefined) => restraint === 'rigid';
 
 /**
- * A spring counts as free in translation and as a pin in rotation: both err on the safe side.
- * Several supports at one position act together.
+ * A rotational spring counts as a pin (the safe side). Several supports at one position act together.
  */
 function endRestraint(supports: readonly SupportModel[], plane: BucklingPlane): EndRestraint {
   const { translation, rotation } = PLANE_DIRECTIONS[plane];
@@ -78,6 +82,17 @@ export function effectiveLengthFactorFromSupports(
 ): EffectiveLengthFactor {
   const tolerance = 1e-9 * model.length;
   const { translation } = PLANE_DIRECTIONS[plane];
+  const unknown = (undetermined: string): EffectiveLengthFactor => ({
+    factor: 2.0,
+    basis: `${undetermined}: K not read from the supports, give an effective-length factor`,
+    undetermined,
+  });
+  // A hinge makes part of the column lean on the rest: K can exceed every tabulated value.
+  if (model.hinges.length > 0) return unknown('the member has internal hinges');
+  // A translational spring is neither a hold nor free: the critical load depends on its stiffness.
+  if (model.supports.some((support) => typeof support.restraints[translation] === 'object')) {
+    return unknown(`a support is a spring along ${translation}`);
+  }
   const atStart: SupportModel[] = [];
   const atEnd: SupportModel[] = [];
   let heldBetween = false;
@@ -97,9 +112,7 @@ export function effectiveLengthFactorFromSupports(
   // The pair in alphabetical order, as ENDS_TO_CONDITIONS lists it.
   const [first, second] = startEnd <= farEnd ? [startEnd, farEnd] : [farEnd, startEnd];
   const endConditions = ENDS_TO_CONDITIONS[`${first}-${second}`];
-  if (endConditions === undefined) {
-    return { factor: 2.0, basis: `ends ${first} and ${second} form no idealised column: K = 2 assumed, give an effective-length factor` };
-  }
+  if (endConditions === undefined) return unknown(`ends ${first} and ${second} form no stable column in this plane`);
   return {
     factor: effectiveLengthFactorFor(endConditions, recommendedDesignValues),
     basis: `${endConditions} ends read from the supports`,

@@ -7,6 +7,7 @@
  * buckling (M_cr near the yield moment) is not covered, and yielding is the bending check's concern.
  */
 
+import { EngineError } from '../engine-error.js';
 import type { SupportModel } from '../member/model.js';
 import type { SectionProperties } from '../sections/section-properties.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
@@ -68,12 +69,15 @@ interface UnbracedLength {
 
 const isRigid = (support: SupportModel, direction: 'uz' | 'rx' | 'ry') => support.restraints[direction] === 'rigid';
 
+/** A fork: the support holds the member rigidly against lateral movement (uz) and twist (rx). */
+const isFork = (support: SupportModel) => isRigid(support, 'uz') && isRigid(support, 'rx');
+
 /**
- * The unbraced lengths. A support that holds the member laterally (uz) is taken as a fork (twist
- * prevented too, common practice). Spans between such supports take Cb from their moment diagram. An
- * overhang takes Cb = 1 (AISC 360-16 sec. F1, cantilevers with an unbraced tip, from memory) and its
- * own length when its root is fixed against twist and lateral bending, else twice it (common practice:
- * a fork root lets the overhang rotate as a whole).
+ * The unbraced lengths between forks. Spans between forks take Cb from their moment diagram. An
+ * overhang takes Cb = 1 and twice its length when its root is also fixed against lateral bending (ry):
+ * the end-couple cantilever, M_cr = (pi / 2 L) sqrt(E Iy G J) (Timoshenko & Gere 2nd ed., ch. 6, from
+ * memory), which bounds tip loads and uniform loads from below; three times it on a fork root (common
+ * practice, conservative: the overhang may swing on plan about the fork).
  */
 function unbracedLengths(context: CheckContext): UnbracedLength[] {
   const { model, analysis, lateralTorsional = {} } = context.input;
@@ -82,7 +86,14 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
     const length = lateralTorsional.unbracedLength;
     return [{ from: 0, to: model.length, unbracedLength: length, effectiveLength: length, momentGradientFactor: given ?? 1 }];
   }
-  return segmentsBetweenSupports(model, (support) => isRigid(support, 'uz')).map((segment) => {
+  if (!model.supports.some(isFork) && largestMagnitudeOn(analysis, 'momentZ', 0, model.length).value > 0) {
+    throw new EngineError(
+      'not-applicable',
+      'No support holds the member against both lateral movement (uz) and twist (rx), so its lateral-torsional buckling length cannot be read from the supports: give lateralTorsional.unbracedLength (with momentGradientFactor), or lateralTorsional.braced.',
+      ['lateralTorsional', 'unbracedLength'],
+    );
+  }
+  return segmentsBetweenSupports(model, isFork).map((segment) => {
     const length = segment.to - segment.from;
     if (segment.kind === 'span') {
       return {
@@ -98,7 +109,7 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
       from: segment.from,
       to: segment.to,
       unbracedLength: length,
-      effectiveLength: fixedRoot ? length : 2 * length,
+      effectiveLength: (fixedRoot ? 2 : 3) * length,
       momentGradientFactor: given ?? 1,
     };
   });

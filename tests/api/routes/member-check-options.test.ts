@@ -134,3 +134,35 @@ describe('pin errors', () => {
     expect(response.body.errors.map((e: { pointer: string }) => e.pointer)).toEqual(['/member/supports/0/pin/diameter']);
   });
 });
+
+describe('stability that cannot be read from the supports', () => {
+  it('asks for an effective-length factor when a compressed member has an internal hinge', async () => {
+    // Fixed at 0, hinge at mid-length, roller at the end: the upper half leans on a cantilever, K = 1.35
+    // (tan(kL/2) = kL by equilibrium), beyond the fixed-pinned 0.7 the supports alone would suggest.
+    const response = await post({
+      section: { designation: 'HEA 200' },
+      member: { length: 8, supports: [{ position: 0, type: 'fixed' }, { position: 8, type: 'roller' }], hinges: [{ position: 4 }] },
+      loads: [{ type: 'point', position: 8, fx: '-150 kN' }],
+    });
+    expect(response.status).toBe(422);
+    expect(response.body.errors[0].pointer).toBe('/buckling/effectiveLengthFactor');
+    const given = await post({
+      section: { designation: 'HEA 200' },
+      member: { length: 8, supports: [{ position: 0, type: 'fixed' }, { position: 8, type: 'roller' }], hinges: [{ position: 4 }] },
+      loads: [{ type: 'point', position: 8, fx: '-150 kN' }],
+      buckling: { effectiveLengthFactor: 1.35 },
+    });
+    expect(given.status).toBe(200);
+    expect(given.body.buckling.governing.effectiveLengthFactor).toBe(1.35);
+  });
+
+  it('asks for an unbraced length when no support holds the beam against lateral movement and twist', async () => {
+    const response = await post({
+      section: { designation: 'IPE 300' },
+      member: { length: 6, supports: [{ position: 0, type: 'general', restrained: ['ux', 'uy', 'uz'] }, { position: 6, type: 'general', restrained: ['uy', 'uz'] }] },
+      loads: [{ type: 'distributed', from: 0, to: 6, qy: '-10 kN/m' }],
+    });
+    expect(response.status).toBe(422);
+    expect(response.body.errors[0].pointer).toBe('/lateralTorsional/unbracedLength');
+  });
+});

@@ -44,7 +44,7 @@ describe('moment amplification', () => {
   it('stays finite beyond the Euler load: the load factor falls below 1', () => {
     const analysis = constantAxial(3, -300e3, { momentZ: [500] });
     const context = contextOf({ analysis, section, material: steel, buckling: { amplification: true } });
-    const [check] = beamColumnChecks(context, context.peaks.axialCompression).checks;
+    const check = beamColumnChecks(context, context.peaks.axialCompression).checks.find((c) => c.mode === 'beam-column');
     expect(check?.safetyFactor).toBeLessThan(eulerZ / 300e3);
     expect(Number.isFinite(check?.utilization)).toBe(true);
     expect(check?.passes).toBe(false);
@@ -53,12 +53,14 @@ describe('moment amplification', () => {
   it('without moments reduces to the lower of the squash load and the Euler load', () => {
     // Squash A Sy = 1775 kN > P_e,z = 239.89 kN.
     const context = contextOf({ analysis: constantAxial(3, -100e3), section, material: steel, buckling: { amplification: true } });
-    const [check] = beamColumnChecks(context, context.peaks.axialCompression).checks;
+    const check = beamColumnChecks(context, context.peaks.axialCompression).checks.find((c) => c.mode === 'beam-column');
     expect(relativeError(check?.capacity ?? 0, eulerZ)).toBeLessThan(1e-9);
   });
 
-  it('is listed as not requested, or not applicable without compression', () => {
-    const context = contextOf({ analysis: constantAxial(3, -100e3), section, material: steel });
+  it('runs by default under compression, is listed when switched off, and does not apply without compression', () => {
+    const byDefault = contextOf({ analysis: constantAxial(3, -100e3), section, material: steel });
+    expect(beamColumnChecks(byDefault, byDefault.peaks.axialCompression).checks.map((c) => c.mode)).toEqual(['beam-column']);
+    const context = contextOf({ analysis: constantAxial(3, -100e3), section, material: steel, buckling: { amplification: false } });
     expect(beamColumnChecks(context, context.peaks.axialCompression).notApplicable.map((n) => n.mode)).toEqual([
       'beam-column',
       'eccentric-column',
@@ -78,7 +80,7 @@ describe('secant formula', () => {
 
   it('finds the load at which P/A [1 + (e c / r^2) sec((L / 2r) sqrt(P / EA))] reaches Sy (Shigley 10th ed., eq. 4-50)', () => {
     const context = contextOf({ analysis: constantAxial(1.5, -10e3), section, material: steel, buckling: { eccentricity: 0.005 } });
-    const [check] = beamColumnChecks(context, context.peaks.axialCompression).checks;
+    const check = beamColumnChecks(context, context.peaks.axialCompression).checks.find((c) => c.mode === 'eccentric-column');
     expect(check?.mode).toBe('eccentric-column');
     expect(relativeError(secantStress(check?.capacity ?? 0), SY)).toBeLessThan(1e-9);
     // Below the Euler load pi^2 E I / L^2 = 9.8696 * 210e9 * 1.25664e-7 / 2.25 = 115.8 kN and below A Sy / 2 = 223 kN
@@ -89,7 +91,7 @@ describe('secant formula', () => {
 
   it('tends to the lower of the squash and Euler loads as the eccentricity vanishes', () => {
     const context = contextOf({ analysis: constantAxial(1.5, -10e3), section, material: steel, buckling: { eccentricity: 1e-9 } });
-    const [check] = beamColumnChecks(context, context.peaks.axialCompression).checks;
+    const check = beamColumnChecks(context, context.peaks.axialCompression).checks.find((c) => c.mode === 'eccentric-column');
     const euler = (Math.PI ** 2 * E * section.secondMomentZ) / 1.5 ** 2;
     expect(relativeError(check?.capacity ?? 0, euler)).toBeLessThan(1e-3);
   });
@@ -98,7 +100,7 @@ describe('secant formula', () => {
     // Cast iron, e c / r^2 = 4 (e = 20 mm): the bending on the far side exceeds P/A three times over, and Sut is
     // 3.5 times smaller than Suc, so the tension side governs.
     const context = contextOf({ analysis: constantAxial(0.5, -10e3), section, material: castIron, buckling: { eccentricity: 0.02 } });
-    const [check] = beamColumnChecks(context, context.peaks.axialCompression).checks;
+    const check = beamColumnChecks(context, context.peaks.axialCompression).checks.find((c) => c.mode === 'eccentric-column');
     expect(check?.location).toContain('tension side');
     expect(check?.requiredSafetyFactor).toBe(2.5);
   });

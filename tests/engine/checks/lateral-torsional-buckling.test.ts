@@ -67,17 +67,22 @@ describe('lateralTorsionalChecks', () => {
     expect(check?.position).toBeCloseTo(2, 12);
   });
 
-  it('takes a cantilever with a fixed root at its own length and Cb = 1', () => {
+  it('takes a cantilever with a fixed root at twice its length and Cb = 1: the end-couple case, M_cr = (pi / 2L) sqrt(E Iy G J) (Timoshenko & Gere 2nd ed., ch. 6, from memory)', () => {
     const analysis = cantileverTipLoad(2, 1e3, 1);
     const { summary } = lateralTorsionalChecks(contextOf({ analysis, section, material: steel, supports: [support(0, FIXED)] }));
-    expect(summary?.effectiveLength).toBe(2);
+    expect(summary?.effectiveLength).toBe(4);
     expect(summary?.momentGradientFactor).toBe(1);
   });
 
-  it('doubles the length of an overhang whose root is only a fork (common practice)', () => {
+  it('triples the length of an overhang whose root is only a fork (common practice, conservative)', () => {
     const analysis = cantileverTipLoad(2, 1e3, 1);
     const { summary } = lateralTorsionalChecks(contextOf({ analysis, section, material: steel, supports: [support(0, [...PIN, 'rz'])] }));
-    expect(summary?.effectiveLength).toBe(4);
+    expect(summary?.effectiveLength).toBe(6);
+  });
+
+  it('refuses to guess when no support holds the member against lateral movement and twist', () => {
+    const analysis = cantileverTipLoad(2, 1e3, 1);
+    expect(() => lateralTorsionalChecks(contextOf({ analysis, section, material: steel, supports: [support(0, ['ux', 'uy', 'rz'])] }))).toThrow(/lateralTorsional\.unbracedLength/);
   });
 
   it('uses a requested unbraced length with Cb = 1 unless one is given', () => {

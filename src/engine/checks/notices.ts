@@ -21,7 +21,13 @@ export const ELEMENTARY_SHEAR_NOTICE = 'The transverse shear stress V Q / (I b) 
 export const AVERAGE_SHEAR_NOTICE =
   'The section gives no first moment of area for shear: the transverse shear stress is the average V / A, which understates the peak.';
 export const UNSYMMETRIC_NOTICE =
-  'The principal axes are not y and z (product moment Iyz is not zero): stresses use the unsymmetric-bending formula, and the deflections treat bending about y and z as uncoupled.';
+  'The principal axes are not y and z (product moment Iyz is not zero): stresses use the unsymmetric-bending formula, but the deflections treat bending about y and z as uncoupled and can understate the true deflection (for an unequal angle, up to about twice).';
+export const SHEAR_CENTRE_NOTICE =
+  'Loads are taken to act through the shear centre: a load through the web or the centroid of a channel, tee or angle also twists it, and that torsion is not included.';
+export const WARPING_NOTICE =
+  'Torsion is taken as uniform (Saint-Venant): where an open section is restrained against warping (a fixed end), warping normal stresses add to the bending stresses and are not included.';
+export const WEB_TOE_NOTICE =
+  'The combined stress is evaluated at the extreme fibres and at the neutral axis, not at the web at the root of the fillets, where bending and shear of a short, heavily loaded I-section or channel can combine to about 10 % more.';
 export const BIAXIAL_SHEAR_NOTICE =
   'Shear acts along both y and z: the larger direction is checked; on a solid section the two can meet at the centroid, where their resultant can reach up to sqrt(2) times the larger.';
 export const LATERAL_TORSIONAL_NOTICE =
@@ -46,6 +52,10 @@ const STAND_IN_NOTICE_ENTRIES = Object.entries(STAND_IN_NOTICES) as [keyof Known
 export const NO_DEMAND_NOTICE = 'No load effect anywhere on the member: every utilization is zero.';
 
 const THIN_WALLED_SHAPES = new Set(['i-section', 'channel', 'tee', 'angle', 'box', 'tube']);
+/** Open shapes whose shear centre is away from the centroid. */
+const UNSYMMETRIC_OPEN_SHAPES = new Set(['channel', 'tee', 'angle']);
+/** Open shapes with flanges, where warping and the web-to-flange junction matter. */
+const WARPING_SHAPES = new Set(['i-section', 'channel']);
 /** Non-circular sections whose two transverse shear peaks can meet at one point. */
 const SOLID_SHAPES = new Set(['rectangle', 'custom']);
 
@@ -65,6 +75,9 @@ export function memberNotices(context: CheckContext, checks: readonly FailureChe
     if (section.known?.[property] === false) notices.push(notice);
   }
   if (productMomentOf(section) !== 0) notices.push(UNSYMMETRIC_NOTICE);
+  if (UNSYMMETRIC_OPEN_SHAPES.has(section.shape)) notices.push(SHEAR_CENTRE_NOTICE);
+  if (WARPING_SHAPES.has(section.shape) && peaks.torsionalShear.value > 0) notices.push(WARPING_NOTICE);
+  if (WARPING_SHAPES.has(section.shape) && peaks.transverseShear.value > 0 && peaks.bendingTension.value > 0) notices.push(WEB_TOE_NOTICE);
   if (peaks.transverseShear.value > 0) {
     notices.push(transverseShearPerForce(section).elementary ? ELEMENTARY_SHEAR_NOTICE : AVERAGE_SHEAR_NOTICE);
   }

@@ -11,6 +11,9 @@ import {
   UNSYMMETRIC_NOTICE,
   BIAXIAL_SHEAR_NOTICE,
   STAND_IN_NOTICES,
+  WEB_TOE_NOTICE,
+  WARPING_NOTICE,
+  SHEAR_CENTRE_NOTICE,
 } from '../../../src/engine/checks/notices.js';
 import { analysisFrom, constantAxial, simpleSpanUniformLoad } from './fixtures/analyses.js';
 import { inputOf } from './fixtures/inputs.js';
@@ -25,6 +28,16 @@ describe('memberNotices', () => {
     expect(outcome.notices).toContain(ELEMENTARY_SHEAR_NOTICE);
     expect(outcome.notices.some((n) => n.startsWith('Default criteria'))).toBe(true);
     expect(outcome.notices).not.toContain(LOCAL_BUCKLING_NOTICE);
+  });
+
+  it('warns that the web at the fillet root, warping and the shear centre are left out, where they matter', () => {
+    const section = iSection(0.2, 0.1, 0.0056, 0.0085);
+    const beam = checkMember(inputOf({ analysis: simpleSpanUniformLoad(4, 1e3, 1), section, material: steel }));
+    expect(beam.notices).toContain(WEB_TOE_NOTICE);
+    expect(beam.notices).not.toContain(WARPING_NOTICE);
+    expect(beam.notices).not.toContain(SHEAR_CENTRE_NOTICE);
+    const twisted = checkMember(inputOf({ analysis: constantAxial(3, 0, { torque: [200] }), section, material: steel }));
+    expect(twisted.notices).toContain(WARPING_NOTICE);
   });
 
   it('names the defaults only when some stand in', () => {

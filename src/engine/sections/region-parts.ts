@@ -80,25 +80,57 @@ export function negated(parts: readonly RegionPart[]): RegionPart[] {
   return parts.map((part) => ({ ...part, sign: part.sign === 1 ? -1 : 1 }));
 }
 
+/** Integrals of s^0, s^1, s^2 written in place, for loops over many cuts. */
+export class MutableCutIntegrals implements CutIntegrals {
+  area = 0;
+  firstMoment = 0;
+  secondMoment = 0;
+}
+
+/**
+ * Antiderivatives in t = s - centre of w, t w and t^2 w with w = sqrt(r^2 - t^2) (standard
+ * integrals), written to out as its area, firstMoment and secondMoment.
+ */
+function writeCircleAntiderivatives(t: number, radius: number, out: MutableCutIntegrals): MutableCutIntegrals {
+  const clamped = Math.min(radius, Math.max(-radius, t));
+  // (r - t)(r + t) and atan2 stay accurate near the rim, where r^2 - t^2 and asin(t / r) lose digits.
+  const root = Math.sqrt((radius - clamped) * (radius + clamped));
+  const angle = Math.atan2(clamped, root);
+  const r2 = radius * radius;
+  out.area = (clamped * root + r2 * angle) / 2;
+  out.firstMoment = -(root * root * root) / 3;
+  out.secondMoment = (clamped * (2 * clamped * clamped - r2) * root + r2 * r2 * angle) / 8;
+  return out;
+}
+
 /**
  * A piece seen along one coordinate s: it spans [min, max] and its chord (the length cut by the line
- * s = constant) is either constant or that of a circle of the given radius about s = centre.
+ * s = constant) is either constant or that of a circle of the given radius about s = centre. A
+ * circle keeps the antiderivatives at its near end, which every cut through it shares.
  */
-type Profile =
-  | { readonly kind: 'constant'; readonly min: number; readonly max: number; readonly chord: number }
-  | { readonly kind: 'circle'; readonly min: number; readonly max: number; readonly centre: number; readonly radius: number };
+export type Profile =
+  | { readonly kind: 'constant'; readonly sign: Sign; readonly min: number; readonly max: number; readonly chord: number }
+  | {
+      readonly kind: 'circle';
+      readonly sign: Sign;
+      readonly min: number;
+      readonly max: number;
+      readonly centre: number;
+      readonly radius: number;
+      readonly atMin: CutIntegrals;
+    };
 
-function profileAlong(part: RegionPart, coordinate: Coordinate): Profile {
+export function profileAlong(part: RegionPart, coordinate: Coordinate): Profile {
   if (part.kind === 'rectangle') {
     return coordinate === 'y'
-      ? { kind: 'constant', min: part.yMin, max: part.yMax, chord: part.zMax - part.zMin }
-      : { kind: 'constant', min: part.zMin, max: part.zMax, chord: part.yMax - part.yMin };
+      ? { kind: 'constant', sign: part.sign, min: part.yMin, max: part.yMax, chord: part.zMax - part.zMin }
+      : { kind: 'constant', sign: part.sign, min: part.zMin, max: part.zMax, chord: part.yMax - part.yMin };
   }
   const centre = coordinate === 'y' ? part.centreY : part.centreZ;
   const towards = coordinate === 'y' ? part.towardsY : part.towardsZ;
   const min = towards === 1 ? centre : centre - part.radius;
   const max = towards === 1 ? centre + part.radius : centre;
-  return { kind: 'circle', min, max, centre, radius: part.radius };
+  return { kind: 'circle', sign: part.sign, min, max, centre, radius: part.radius, atMin: writeCircleAntiderivatives(min - centre, part.radius, new MutableCutIntegrals()) };
 }
 
 export function extentAlong(part: RegionPart, coordinate: Coordinate): readonly [number, number] {
@@ -106,61 +138,60 @@ export function extentAlong(part: RegionPart, coordinate: Coordinate): readonly 
   return [profile.min, profile.max];
 }
 
-/** Antiderivatives in t = s - centre of w, t w and t^2 w with w = sqrt(r^2 - t^2) (standard integrals). */
-function circleAntiderivatives(t: number, radius: number): readonly [number, number, number] {
-  const clamped = Math.min(radius, Math.max(-radius, t));
-  // (r - t)(r + t) and atan2 stay accurate near the rim, where r^2 - t^2 and asin(t / r) lose digits.
-  const root = Math.sqrt((radius - clamped) * (radius + clamped));
-  const angle = Math.atan2(clamped, root);
-  const r2 = radius * radius;
-  return [
-    (clamped * root + r2 * angle) / 2,
-    -(root * root * root) / 3,
-    (clamped * (2 * clamped * clamped - r2) * root + r2 * r2 * angle) / 8,
-  ];
+const circleScratch = new MutableCutIntegrals();
+
+/**
+ * Writes the signed integrals of 1, s, s^2 over the part of the piece with s < cut (cut = Infinity:
+ * the whole piece) to out; false, writing nothing, when no part of the piece lies below the cut.
+ */
+export function writeIntegralsBelow(profile: Profile, cut: number, out: MutableCutIntegrals): boolean {
+  const upper = Math.min(cut, profile.max);
+  if (!(upper > profile.min)) return false;
+  const lower = profile.min;
+  if (profile.kind === 'constant') {
+    const w = profile.chord * profile.sign;
+    const span = upper - lower;
+    out.area = w * span;
+    out.firstMoment = (w * span * (upper + lower)) / 2;
+    out.secondMoment = (w * span * (upper * upper + upper * lower + lower * lower)) / 3;
+    return true;
+  }
+  const m = profile.centre;
+  const atUpper = writeCircleAntiderivatives(upper - m, profile.radius, circleScratch);
+  const { atMin } = profile;
+  const area = atUpper.area - atMin.area;
+  const firstAboutCentre = atUpper.firstMoment - atMin.firstMoment;
+  const secondAboutCentre = atUpper.secondMoment - atMin.secondMoment;
+  out.area = profile.sign * area;
+  out.firstMoment = profile.sign * (m * area + firstAboutCentre);
+  out.secondMoment = profile.sign * (m * m * area + 2 * m * firstAboutCentre + secondAboutCentre);
+  return true;
 }
 
 const NOTHING: CutIntegrals = { area: 0, firstMoment: 0, secondMoment: 0 };
 
 /** Signed integrals of 1, s, s^2 over the part of the piece with s < cut (cut = Infinity: the whole piece). */
 export function integralsBelow(part: RegionPart, coordinate: Coordinate, cut: number): CutIntegrals {
-  const profile = profileAlong(part, coordinate);
-  const upper = Math.min(cut, profile.max);
-  if (!(upper > profile.min)) return NOTHING;
-  const lower = profile.min;
-  if (profile.kind === 'constant') {
-    const w = profile.chord * part.sign;
-    const span = upper - lower;
-    return {
-      area: w * span,
-      firstMoment: (w * span * (upper + lower)) / 2,
-      secondMoment: (w * span * (upper * upper + upper * lower + lower * lower)) / 3,
-    };
-  }
-  const m = profile.centre;
-  const [a1, b1, c1] = circleAntiderivatives(upper - m, profile.radius);
-  const [a0, b0, c0] = circleAntiderivatives(lower - m, profile.radius);
-  const area = a1 - a0;
-  const firstAboutCentre = b1 - b0;
-  const secondAboutCentre = c1 - c0;
-  return {
-    area: part.sign * area,
-    firstMoment: part.sign * (m * area + firstAboutCentre),
-    secondMoment: part.sign * (m * m * area + 2 * m * firstAboutCentre + secondAboutCentre),
-  };
+  const out = new MutableCutIntegrals();
+  if (!writeIntegralsBelow(profileAlong(part, coordinate), cut, out)) return NOTHING;
+  return { area: out.area, firstMoment: out.firstMoment, secondMoment: out.secondMoment };
 }
 
 /**
- * Signed chord of the line s = at through the piece, as the limit from below or from above the line
- * (the two differ only on a straight edge of the piece).
+ * Signed chord of the line s = at through the profile, as the limit from below or from above the
+ * line (the two differ only on a straight edge of the piece).
  */
-export function chordAt(part: RegionPart, coordinate: Coordinate, at: number, side: 'below' | 'above'): number {
-  const profile = profileAlong(part, coordinate);
+export function profileChordAt(profile: Profile, at: number, side: 'below' | 'above'): number {
   const inside = side === 'below' ? profile.min < at && at <= profile.max : profile.min <= at && at < profile.max;
   if (!inside) return 0;
-  if (profile.kind === 'constant') return part.sign * profile.chord;
+  if (profile.kind === 'constant') return profile.sign * profile.chord;
   const t = Math.min(profile.radius, Math.abs(at - profile.centre));
-  return part.sign * Math.sqrt((profile.radius - t) * (profile.radius + t));
+  return profile.sign * Math.sqrt((profile.radius - t) * (profile.radius + t));
+}
+
+/** Signed chord of the line s = at through the piece (profileChordAt). */
+export function chordAt(part: RegionPart, coordinate: Coordinate, at: number, side: 'below' | 'above'): number {
+  return profileChordAt(profileAlong(part, coordinate), at, side);
 }
 
 /** Signed integral of y z dA over the piece, about the origin. */

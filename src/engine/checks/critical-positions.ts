@@ -42,29 +42,35 @@ function derivativeCanVanish(p: Polynomial): boolean {
   return false;
 }
 
-/** The same coefficients, signed zeros told apart. */
-function samePolynomial(p: Polynomial, q: Polynomial): boolean {
-  if (p.length !== q.length) return false;
-  for (let i = 0; i < p.length; i++) if (!Object.is(p[i], q[i])) return false;
-  return true;
-}
+/**
+ * Polynomials kept by their last coefficient, so that an equal one is found without comparing it
+ * with every other. Equal means the same coefficients from index `from` on, signed zeros told apart:
+ * from 1, the same derivative and so the same roots.
+ */
+class PolynomialTable<T> {
+  private readonly buckets = new Map<number, { readonly key: Polynomial; readonly value: T }[]>();
 
-function indexOfPolynomial(list: readonly Polynomial[], p: Polynomial): number {
-  for (let i = 0; i < list.length; i++) if (samePolynomial(list[i] as Polynomial, p)) return i;
-  return -1;
-}
+  constructor(private readonly from: 0 | 1) {}
 
-/** An earlier polynomial of the list has the same coefficients beyond the constant, hence the same derivative and roots. */
-function derivativeRepeats(polynomials: readonly Polynomial[], index: number): boolean {
-  const p = polynomials[index] as Polynomial;
-  for (let j = 0; j < index; j++) {
-    const q = polynomials[j] as Polynomial;
-    if (q.length !== p.length) continue;
-    let same = true;
-    for (let i = 1; i < p.length && same; i++) same = Object.is(p[i], q[i]);
-    if (same) return true;
+  get(p: Polynomial): T | undefined {
+    const bucket = this.buckets.get(p[p.length - 1] as number);
+    if (bucket === undefined) return undefined;
+    for (const entry of bucket) if (this.equal(entry.key, p)) return entry.value;
+    return undefined;
   }
-  return false;
+
+  set(p: Polynomial, value: T): void {
+    const last = p[p.length - 1] as number;
+    const bucket = this.buckets.get(last);
+    if (bucket === undefined) this.buckets.set(last, [{ key: p, value }]);
+    else bucket.push({ key: p, value });
+  }
+
+  private equal(p: Polynomial, q: Polynomial): boolean {
+    if (p.length !== q.length) return false;
+    for (let i = this.from; i < p.length; i++) if (!Object.is(p[i], q[i])) return false;
+    return true;
+  }
 }
 
 function ascending(a: number, b: number): number {
@@ -78,9 +84,10 @@ function ascending(a: number, b: number): number {
 export function criticalCoordinates(piece: MemberPiece, polynomials: readonly Polynomial[]): number[] {
   const length = piece.end - piece.start;
   const coordinates = [0, length];
-  for (let index = 0; index < polynomials.length; index++) {
-    const p = polynomials[index] as Polynomial;
-    if (!derivativeCanVanish(p) || derivativeRepeats(polynomials, index)) continue;
+  const solved = new PolynomialTable<true>(1);
+  for (const p of polynomials) {
+    if (!derivativeCanVanish(p) || solved.get(p) !== undefined) continue;
+    solved.set(p, true);
     for (const root of realRootsIn(derivative(p), 0, length)) coordinates.push(root);
   }
   coordinates.sort(ascending);
@@ -106,19 +113,19 @@ function measurePolynomials(piece: MemberPiece, factors: SectionStressFactors): 
   const torsional = scaledPolynomial(torque, factors.torsionalShearPerTorque);
   const torsionalSquaredTimesThree = scaledPolynomial(squarePolynomial(torsional), 3);
   const { perMomentZ, perMomentY } = factors;
-  const normals: Polynomial[] = [];
-  const squaredMeasures: Polynomial[] = [];
+  // Points that share their normal stress (both flange tips under Mz alone) share its square: made once.
+  const squaredByNormal = new PolynomialTable<Polynomial>(0);
   for (let k = 0; k < perMomentZ.length; k++) {
     const normal = sumOfPolynomials(
       axialStress,
       scaledPolynomial(momentZ, perMomentZ[k] as number),
       scaledPolynomial(momentY, perMomentY[k] as number),
     );
-    // Points on a line of no bending (both flange tips under Mz alone) share their normal stress: square it once.
-    const seen = indexOfPolynomial(normals, normal);
-    const squared = seen >= 0 ? (squaredMeasures[seen] as Polynomial) : sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree);
-    normals.push(normal);
-    squaredMeasures.push(squared);
+    let squared = squaredByNormal.get(normal);
+    if (squared === undefined) {
+      squared = sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree);
+      squaredByNormal.set(normal, squared);
+    }
     polynomials.push(normal, squared);
   }
   const axialStressSquared = squarePolynomial(axialStress);

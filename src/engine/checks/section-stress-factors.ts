@@ -28,7 +28,19 @@ export interface SectionStressFactors {
 
 export const RESULTANT_FIBRE_LABELS = ['extreme fibre, tension side', 'extreme fibre, compression side'] as const;
 
+/** The scan and the stress peaks of a check, and every check of a catalogue section, share its factors. */
+const factorsOfSection = new WeakMap<SectionProperties, SectionStressFactors>();
+
 export function sectionStressFactors(section: SectionProperties): SectionStressFactors {
+  let factors = factorsOfSection.get(section);
+  if (factors === undefined) {
+    factors = factorsOf(section);
+    factorsOfSection.set(section, factors);
+  }
+  return factors;
+}
+
+function factorsOf(section: SectionProperties): SectionStressFactors {
   const resultant = section.bendingCombination === 'resultant';
   const points = resultant ? [] : stressPointsOf(section);
   const perMomentZ = new Float64Array(points.length);

@@ -5,7 +5,7 @@
 
 import { randomUUID } from 'node:crypto';
 import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
-import { sendProblem, registerErrorHandler } from './api/error-handler.js';
+import { problemFromError, registerErrorHandler, sendProblem } from './api/error-handler.js';
 import { RouteTable } from './api/method-not-allowed.js';
 import { buildOpenApiDocument } from './api/openapi/document.js';
 import { ProblemError } from './api/problems.js';
@@ -54,6 +54,10 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     onProtoPoisoning: 'error',
     onConstructorPoisoning: 'error',
     return503OnClosing: true,
+    // Errors Fastify raises before routing (a malformed URL, say) are problems too.
+    frameworkErrors: (error, _request, reply) => {
+      sendProblem(reply, problemFromError(error) ?? new ProblemError('invalidInput', error.message));
+    },
   });
   app.addHook('onRequest', async (request, reply) => {
     reply.header('x-request-id', request.id);

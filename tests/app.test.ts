@@ -118,3 +118,11 @@ describe('problems', () => {
     expect(response.body.errors[0].pointer).toBe('/loads/0/fY');
   });
 });
+
+describe('errors before routing', () => {
+  it('a malformed URL is a 400 problem', async () => {
+    const response = await app.inject({ method: 'GET', url: '/v1/sections/%E0%A4%A' });
+    expect(response.statusCode).toBe(400);
+    expect(response.headers['content-type']).toMatch(/^application\/problem\+json/);
+  });
+});

@@ -68,10 +68,20 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
     factors[kind] = factor;
   }
   if (errors.length > 0) throw new ProblemError('invalidInput', 'Some output units are not valid.', errors);
-  // Deflections are lengths: they follow the length unit unless given a unit of their own.
-  if (request.length !== undefined && request.deflection === undefined) {
-    names.deflection = names.length;
-    factors.deflection = factors.length;
+  // Deflections are lengths, and section properties its powers: they follow the length unit unless
+  // given one of their own ("mm" gives mm^2, mm^3, mm^4, mm^6).
+  if (request.length !== undefined) {
+    const follow = (kind: QuantityKind, name: string, factor: number) => {
+      if (request[kind] !== undefined) return;
+      names[kind] = name;
+      factors[kind] = factor;
+    };
+    follow('deflection', names.length, factors.length);
+    if (/^[A-Za-z]+$/.test(names.length)) {
+      for (const [kind, power] of [['area', 2], ['sectionModulus', 3], ['secondMoment', 4], ['warpingConstant', 6]] as const) {
+        follow(kind, `${names.length}^${power}`, factors.length ** power);
+      }
+    }
   }
   return { names, factors };
 }

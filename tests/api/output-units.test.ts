@@ -45,3 +45,14 @@ describe('deflection units', () => {
     expect(resolveOutputUnits({ length: 'm', deflection: 'mm' }, []).names.deflection).toBe('mm');
   });
 });
+
+describe('section property units', () => {
+  it('follow a plain length unit as its powers unless given their own', () => {
+    const units = resolveOutputUnits({ length: 'mm', secondMoment: 'cm^4' }, []);
+    expect(units.names.area).toBe('mm^2');
+    expect(units.names.sectionModulus).toBe('mm^3');
+    expect(units.names.secondMoment).toBe('cm^4');
+    expect(present(units, 'area', 28.5e-4)).toBeCloseTo(2850, 9);
+    expect(present(units, 'warpingConstant', 12.99e-9)).toBeCloseTo(12.99e9, 0);
+  });
+});

@@ -20,7 +20,7 @@ const unitMap = z
 export const outputUnits = z
   .union([z.enum(['SI', 'US']), unitMap])
   .openapi('OutputUnits', {
-    description: 'SI (default); US (in, kip, kip*ft, ksi, kip/ft, in^4...); or a unit per kind of quantity. The response echoes the units used in `units`.',
+    description: 'SI (default); US (in, kip, kip*ft, ksi, kip/ft, in^4...); or a unit per kind of quantity (kinds not named stay SI, except that deflections follow the length unit, and area, section moduli, second moments and the warping constant follow a plain length unit as its powers). The response echoes the units used in `units`.',
   });
 
 export const outputOptions = z

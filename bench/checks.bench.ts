@@ -15,6 +15,7 @@ import type { LoadModel, MemberModel, SupportModel } from '../src/engine/member/
 import type { SectionDimensions } from '../src/engine/sections/dimensions.js';
 import { sectionProperties } from '../src/engine/sections/section-from-dimensions.js';
 import type { SectionProperties } from '../src/engine/sections/section-properties.js';
+import { memberStiffness } from '../src/engine/member/member-stiffness.js';
 
 /** IPE 200 as EN 10365 dimensions it (values from memory, as in the catalogue). */
 const IPE_200: SectionDimensions = {
@@ -67,12 +68,7 @@ function modelOf(length: number, supports: readonly SupportModel[], loads: reado
     supports,
     hinges: [],
     loads,
-    stiffness: {
-      axial: material.elasticModulus * section.area,
-      bendingZ: material.elasticModulus * section.secondMomentZ,
-      bendingY: material.elasticModulus * section.secondMomentY,
-      torsional: material.shearModulus * section.torsionConstant,
-    },
+    stiffness: memberStiffness(section, material),
   };
 }
 

@@ -94,37 +94,12 @@ export function memberModel(check: NormalisedCheck, section: SectionProperties, 
 }
 
 /** The engine's own errors, as problems whose pointers are rooted where this check sits. */
-export function analyseOrProblem(model: MemberModel, base: Path): MemberAnalysis {
-  try {
-    return analyseMember(model);
-  } catch (error) {
-    if (!(error instanceof EngineError)) throw error;
-    const pointer = jsonPointer([...base, ...error.path]);
-    if (error.kind === 'unstable-member') {
-      throw new ProblemError('unstableMember', error.message, error.path.length > 0 ? [{ pointer, message: error.message }] : [], { mechanism: error.details });
-    }
-    if (error.kind === 'outside-member') throw new ProblemError('invalidInput', `${pointer}: ${error.message}`, [{ pointer, message: error.message }]);
-    throw new ProblemError('notApplicable', error.message, error.path.length > 0 ? [{ pointer, message: error.message }] : []);
-  }
-}
-
-function checkOrProblem(check: NormalisedCheck, member: Omit<CheckedMember, 'outcome'>): MemberCheckOutcome {
-  try {
-    return checkMember({
-      analysis: member.analysis,
-      model: member.model,
-      section: member.section.properties,
-      material: member.material,
-      criteria: check.criteria,
-      buckling: check.buckling,
-      lateralTorsional: check.lateralTorsional,
-      pins: check.pins,
-    });
-  } catch (error) {
-    if (!(error instanceof EngineError)) throw error;
-    const pointer = jsonPointer([...check.base, ...error.path]);
-    throw new ProblemError('notApplicable', error.message, error.path.length > 0 ? [{ pointer, message: error.message }] : []);
-  }
+function problemFromEngineError(error: EngineError, base: Path): ProblemError {
+  const pointer = jsonPointer([...base, ...error.path]);
+  const errors = error.path.length > 0 ? [{ pointer, message: error.message }] : [];
+  if (error.kind === 'unstable-member') return new ProblemError('unstableMember', error.message, errors, { mechanism: error.details });
+  if (error.kind === 'outside-member') return new ProblemError('invalidInput', `${pointer}: ${error.message}`, [{ pointer, message: error.message }]);
+  return new ProblemError('notApplicable', error.message, errors);
 }
 
 export interface CheckedMember {
@@ -138,9 +113,23 @@ export interface CheckedMember {
 export function checkWithSection(check: NormalisedCheck, section: ResolvedSection): CheckedMember {
   const { material } = check.material(section.properties.thickestElement);
   const model = memberModel(check, section.properties, material);
-  const analysis = analyseOrProblem(model, check.base);
-  const outcome = checkOrProblem(check, { section, material, model, analysis });
-  return { section, material, model, analysis, outcome };
+  try {
+    const analysis = analyseMember(model);
+    const outcome = checkMember({
+      analysis,
+      model,
+      section: section.properties,
+      material,
+      criteria: check.criteria,
+      buckling: check.buckling,
+      lateralTorsional: check.lateralTorsional,
+      pins: check.pins,
+    });
+    return { section, material, model, analysis, outcome };
+  } catch (error) {
+    if (error instanceof EngineError) throw problemFromEngineError(error, check.base);
+    throw error;
+  }
 }
 
 export function presentCheck(check: NormalisedCheck, checked: CheckedMember): MemberCheckResponse {
@@ -163,9 +152,15 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
   };
 }
 
-export function runMemberCheck(request: MemberCheckRequest, catalogues: Catalogues, base: Path = []): MemberCheckResponse {
+/** A request normalised and checked, before presenting: what the engine made of it. */
+export function checkRequest(request: MemberCheckRequest, catalogues: Catalogues, base: Path = []): { check: NormalisedCheck; checked: CheckedMember } {
   const reader = new QuantityReader();
   const section = resolveSection(request.section, catalogues.sections, reader, [...base, 'section']);
   const check = normaliseCheck(request, catalogues, base, reader);
-  return presentCheck(check, checkWithSection(check, section()));
+  return { check, checked: checkWithSection(check, section()) };
+}
+
+export function runMemberCheck(request: MemberCheckRequest, catalogues: Catalogues, base: Path = []): MemberCheckResponse {
+  const { check, checked } = checkRequest(request, catalogues, base);
+  return presentCheck(check, checked);
 }

@@ -8,9 +8,7 @@ import { fileURLToPath } from 'node:url';
 import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { checkWithSection, normaliseCheck } from '../../src/api/member-check.js';
-import { QuantityReader } from '../../src/api/normalise/quantity-reader.js';
-import { resolveSection } from '../../src/api/normalise/section.js';
+import { checkRequest } from '../../src/api/member-check.js';
 import { memberCheckRequest } from '../../src/api/schemas/member-check-request.js';
 import { fieldAt } from '../../src/engine/analysis/field-values.js';
 import type { DiagramField, MemberAnalysis } from '../../src/engine/analysis/result.js';
@@ -82,12 +80,7 @@ function close(actual: number, expected: number, tolerance: number, scale: numbe
 }
 
 async function analyseThroughEngine(body: unknown): Promise<MemberAnalysis> {
-  const parsed = memberCheckRequest.parse(body);
-  const catalogues = await embeddedCatalogues();
-  const reader = new QuantityReader();
-  const section = resolveSection(parsed.section, catalogues.sections, reader, ['section']);
-  const check = normaliseCheck(parsed, catalogues, [], reader);
-  return checkWithSection(check, section()).analysis;
+  return checkRequest(memberCheckRequest.parse(body), await embeddedCatalogues()).checked.analysis;
 }
 
 describe('beam-diagram reference cases', () => {

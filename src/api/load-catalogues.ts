@@ -115,7 +115,7 @@ function materialEntry(entry: CompanyMaterial, index: number): MaterialEntry {
   }));
   reader.finish();
   return {
-    ...resolved(0).material,
+    ...resolved.forThickness(0).material,
     grade,
     standard: standard ?? 'company catalogue',
     source: source ?? 'company catalogue',

@@ -18,7 +18,7 @@ import type { LoadModel, MemberModel } from '../engine/member/model.js';
 import type { SectionProperties } from '../engine/sections/section-properties.js';
 import type { MaterialLookup, SectionLookup } from './normalise/catalogue-lookup.js';
 import { normaliseBuckling, normaliseCriteria, normaliseLateralTorsional, normalisePins } from './normalise/check-options.js';
-import { resolveMaterial, type ResolvedMaterial } from './normalise/material.js';
+import { resolveMaterial, type MaterialResolver } from './normalise/material.js';
 import { normaliseLoads, normaliseMember, type NormalisedMember } from './normalise/member.js';
 import { QuantityReader, type Path } from './normalise/quantity-reader.js';
 import { resolveSection, type ResolvedSection } from './normalise/section.js';
@@ -46,7 +46,7 @@ export interface NormalisedCheck {
   readonly selfWeight: boolean;
   readonly samples: number;
   readonly units: OutputUnits;
-  readonly material: (thickestElement: number) => ResolvedMaterial;
+  readonly material: MaterialResolver;
   readonly criteria: CriteriaInput;
   readonly buckling: BucklingInput;
   readonly lateralTorsional: LateralTorsionalInput;
@@ -111,7 +111,7 @@ export interface CheckedMember {
 }
 
 export function checkWithSection(check: NormalisedCheck, section: ResolvedSection): CheckedMember {
-  const { material } = check.material(section.properties.thickestElement);
+  const { material } = check.material.forThickness(section.properties.thickestElement);
   const model = memberModel(check, section.properties, material);
   try {
     const analysis = analyseMember(model);

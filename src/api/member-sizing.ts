@@ -89,8 +89,7 @@ export function runMemberSizing(request: MemberSizingRequest, catalogues: Loaded
   if (all.length > MAX_CANDIDATES) {
     throw invalidField(['candidates'], `${all.length} candidates; at most ${MAX_CANDIDATES} are checked in one request`);
   }
-  // Density does not depend on the thickness band: any band gives it.
-  const density = check.material(0.001).material.density;
+  const { density } = check.material;
   // Each candidate is a whole analysis and check: bound the work one request may ask for.
   const work = all.length * (check.loads.length + check.member.supports.length + check.member.hinges.length + 1);
   if (work > MAX_SIZING_WORK) {

@@ -49,7 +49,7 @@ export function normalisePins(supports: readonly SupportInput[], materials: Mate
     // A bad diameter is already reported; the material waits for a usable one.
     if (!(diameter > 0)) return;
     // A pin's thickness band is its diameter (a round bar).
-    pins.push({ support: index, diameter, plateThickness, shearPlanes: pin.shearPlanes, material: material(diameter).material });
+    pins.push({ support: index, diameter, plateThickness, shearPlanes: pin.shearPlanes, material: material.forThickness(diameter).material });
   });
   return pins;
 }

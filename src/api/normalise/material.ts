@@ -25,14 +25,19 @@ export function unknownGrade(grade: string, materials: MaterialLookup, path: Pat
 }
 
 /**
- * A resolver to call once the section is known: catalogue grades take the strengths of the band
- * that holds the section's thickest element.
+ * The material once the section is known: catalogue grades take the strengths of the band that holds
+ * the section's thickest element. The density does not depend on the band.
  */
-export function resolveMaterial(input: MaterialInput, materials: MaterialLookup, reader: QuantityReader, base: Path): (thickestElement: number) => ResolvedMaterial {
+export interface MaterialResolver {
+  readonly density: number;
+  forThickness(thickestElement: number): ResolvedMaterial;
+}
+
+export function resolveMaterial(input: MaterialInput, materials: MaterialLookup, reader: QuantityReader, base: Path): MaterialResolver {
   if ('grade' in input) {
     const entry = materials.find(input.grade);
     if (entry === undefined) throw unknownGrade(input.grade, materials, [...base, 'grade']);
-    return (thickness) => {
+    const forThickness = (thickness: number): ResolvedMaterial => {
       try {
         return { material: materials.forThickness(entry, thickness), entry };
       } catch (error) {
@@ -43,6 +48,7 @@ export function resolveMaterial(input: MaterialInput, materials: MaterialLookup,
         throw error;
       }
     };
+    return { density: entry.density, forThickness };
   }
   const at = (key: string) => [...base, key];
   const elasticModulus = reader.positive(input.elasticModulus, 'stress', at('elasticModulus'));
@@ -75,5 +81,5 @@ export function resolveMaterial(input: MaterialInput, materials: MaterialLookup,
   if (Number.isFinite(yieldStrength) && Number.isFinite(ultimateStrength) && ultimateStrength < yieldStrength) {
     reader.fail(at('ultimateStrength'), 'must not be less than yieldStrength');
   }
-  return () => ({ material });
+  return { density: material.density, forThickness: () => ({ material }) };
 }

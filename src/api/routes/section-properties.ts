@@ -38,7 +38,7 @@ export function sectionPropertiesRoutes(catalogues: Catalogues) {
       const units = resolveOutputUnits(body.output?.units, ['output', 'units']);
       reader.finish();
       const resolved = section();
-      const density = material?.(resolved.properties.thickestElement).material.density;
+      const density = material?.density;
       const result = { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION] };
       assertFinite(result);
       return result;

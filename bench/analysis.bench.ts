@@ -6,44 +6,17 @@
 
 import { Bench } from 'tinybench';
 import { analyseMember } from '../src/engine/analysis/analyse-member.js';
-import type { LoadModel, MemberModel, SupportModel } from '../src/engine/member/model.js';
+import type { MemberModel } from '../src/engine/member/model.js';
+import { pinned, point, roller, uniform } from './member-models.js';
 
 const STIFFNESS = { axial: 4.2e8, bendingZ: 4.2e6, bendingY: 3.15e5, torsional: 5.67e3 };
-const pinned = (position: number): SupportModel => ({
-  position,
-  restraints: { ux: 'rigid', uy: 'rigid', uz: 'rigid', rx: 'rigid', ry: 'free', rz: 'free' },
-});
-const roller = (position: number): SupportModel => ({
-  position,
-  restraints: { ux: 'free', uy: 'rigid', uz: 'rigid', rx: 'free', ry: 'free', rz: 'free' },
-});
-const point = (position: number, fy: number, fz = 0): LoadModel => ({
-  kind: 'point',
-  position,
-  fx: 0,
-  fy,
-  fz,
-  mx: 0,
-  my: 0,
-  mz: 0,
-});
-const uniform = (from: number, to: number, qy: number): LoadModel => ({
-  kind: 'distributed',
-  from,
-  to,
-  qx: [0, 0],
-  qy: [qy, qy],
-  qz: [0, 0],
-  mx: [0, 0],
-});
-
 /** A 6 m shelf beam: uniform load, a point load and a sideways point load. */
 function simpleSpan(): MemberModel {
   return {
     length: 6,
     supports: [pinned(0), roller(6)],
     hinges: [],
-    loads: [uniform(0, 6, -2e3), point(2.5, -5e3), point(4, 0, 800)],
+    loads: [uniform(0, 6, -2e3), point(2.5, { fy: -5e3 }), point(4, { fz: 800 })],
     stiffness: STIFFNESS,
   };
 }
@@ -66,7 +39,7 @@ function manyPointLoads(count: number): MemberModel {
     length: 10,
     supports: [pinned(0), roller(10)],
     hinges: [],
-    loads: Array.from({ length: count }, (_, i) => point((10 * (i + 0.5)) / count, -1e3)),
+    loads: Array.from({ length: count }, (_, i) => point((10 * (i + 0.5)) / count, { fy: -1e3 })),
     stiffness: STIFFNESS,
   };
 }

@@ -12,6 +12,7 @@ import { checkMember } from '../src/engine/checks/check-member.js';
 import type { MemberCheckInput } from '../src/engine/checks/check-input.js';
 import type { Material } from '../src/engine/materials/material.js';
 import type { LoadModel, MemberModel, SupportModel } from '../src/engine/member/model.js';
+import { fixed, pinned, point, roller, uniform } from './member-models.js';
 import type { SectionDimensions } from '../src/engine/sections/dimensions.js';
 import { sectionProperties } from '../src/engine/sections/section-from-dimensions.js';
 import type { SectionProperties } from '../src/engine/sections/section-properties.js';
@@ -44,24 +45,6 @@ const SHAPES: readonly { readonly name: string; readonly dimensions: SectionDime
   },
 ];
 
-const FREE = { ux: 'free', uy: 'free', uz: 'free', rx: 'free', ry: 'free', rz: 'free' } as const;
-const pinned = (position: number): SupportModel => ({ position, restraints: { ...FREE, ux: 'rigid', uy: 'rigid', uz: 'rigid', rx: 'rigid' } });
-const roller = (position: number): SupportModel => ({ position, restraints: { ...FREE, uy: 'rigid', uz: 'rigid' } });
-const fixed = (position: number): SupportModel => ({
-  position,
-  restraints: { ux: 'rigid', uy: 'rigid', uz: 'rigid', rx: 'rigid', ry: 'rigid', rz: 'rigid' },
-});
-const point = (position: number, fx: number, fy: number): LoadModel => ({ kind: 'point', position, fx, fy, fz: 0, mx: 0, my: 0, mz: 0 });
-const uniform = (from: number, to: number, qy: number): LoadModel => ({
-  kind: 'distributed',
-  from,
-  to,
-  qx: [0, 0],
-  qy: [qy, qy],
-  qz: [0, 0],
-  mx: [0, 0],
-});
-
 function modelOf(length: number, supports: readonly SupportModel[], loads: readonly LoadModel[], section: SectionProperties, material: Material): MemberModel {
   return {
     length,
@@ -80,13 +63,13 @@ function steelS355(): Material {
 
 /** A 4 m shelving beam of a fictional maker: 8 kN/m and 10 kN at 1.5 m, pinned and on a roller. */
 function simpleBeam(section: SectionProperties, material: Material): MemberCheckInput {
-  const model = modelOf(4, [pinned(0), roller(4)], [uniform(0, 4, -8e3), point(1.5, 0, -10e3)], section, material);
+  const model = modelOf(4, [pinned(0), roller(4)], [uniform(0, 4, -8e3), point(1.5, { fy: -10e3 })], section, material);
   return { analysis: analyseMember(model), model, section, material };
 }
 
 /** A 2.5 m platform post fixed at its foot: 150 kN down its axis and 5 kN sideways at the tip, with moment amplification. */
 function compressedCantilever(section: SectionProperties, material: Material): MemberCheckInput {
-  const model = modelOf(2.5, [fixed(0)], [point(2.5, -150e3, -5e3)], section, material);
+  const model = modelOf(2.5, [fixed(0)], [point(2.5, { fx: -150e3, fy: -5e3 })], section, material);
   return { analysis: analyseMember(model), model, section, material, buckling: { amplification: true } };
 }
 

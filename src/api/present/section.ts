@@ -4,12 +4,11 @@ import type { SectionProperties } from '../../engine/sections/section-properties
 import type { ResolvedSection } from '../normalise/section.js';
 import { present, type OutputUnits } from '../output-units.js';
 import { CUSTOM_DIMENSION_KINDS } from '../schemas/section-input.js';
+import { presentFieldTable } from '../schemas/field-table.js';
 import { SECTION_PROPERTY_FIELDS } from '../schemas/section-output.js';
 
 export function presentSectionProperties(properties: SectionProperties, units: OutputUnits, density?: number) {
-  const numeric = Object.fromEntries(
-    Object.entries(SECTION_PROPERTY_FIELDS).map(([name, field]) => [name, present(units, field.kind, properties[name as keyof typeof SECTION_PROPERTY_FIELDS])]),
-  ) as Record<keyof typeof SECTION_PROPERTY_FIELDS, number>;
+  const numeric = presentFieldTable(SECTION_PROPERTY_FIELDS, properties, units);
   return {
     shape: properties.shape,
     ...numeric,

@@ -1,13 +1,12 @@
 /** A resolved material in a response. */
 
 import type { Material } from '../../engine/materials/material.js';
-import type { QuantityKind } from '../quantities.js';
-import { presentedQuantity } from './quantity.js';
+import { fieldTableShape, type FieldTable } from './field-table.js';
 import { z } from './zod.js';
 
 type NumericMaterialField = { [K in keyof Material]-?: Material[K] extends number ? K : never }[keyof Material];
 
-export const MATERIAL_FIELDS: Record<NumericMaterialField, { kind: QuantityKind | 'ratio'; description: string }> = {
+export const MATERIAL_FIELDS: FieldTable<NumericMaterialField> = {
   elasticModulus: { kind: 'stress', description: "Young's modulus E." },
   shearModulus: { kind: 'stress', description: 'Shear modulus G.' },
   poissonRatio: { kind: 'ratio', description: "Poisson's ratio." },
@@ -19,12 +18,7 @@ export const MATERIAL_FIELDS: Record<NumericMaterialField, { kind: QuantityKind 
   density: { kind: 'density', description: 'Density.' },
 };
 
-const numeric = Object.fromEntries(
-  Object.entries(MATERIAL_FIELDS).map(([name, field]) => [
-    name,
-    field.kind === 'ratio' ? z.number().openapi({ description: `${field.description} Dimensionless.` }) : presentedQuantity(field.kind, field.description),
-  ]),
-) as Record<NumericMaterialField, z.ZodNumber>;
+const numeric = fieldTableShape(MATERIAL_FIELDS);
 
 export const materialOutput = z
   .object({

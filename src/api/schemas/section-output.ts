@@ -1,14 +1,14 @@
 /** A resolved section in a response: where it came from, its dimensions and its properties. */
 
 import type { SectionProperties } from '../../engine/sections/section-properties.js';
-import type { QuantityKind } from '../quantities.js';
+import { fieldTableShape, type FieldTable } from './field-table.js';
 import { presentedQuantity } from './quantity.js';
 import { z } from './zod.js';
 
 type NumericProperty = { [K in keyof SectionProperties]-?: SectionProperties[K] extends number ? K : never }[keyof SectionProperties];
 
 /** Each numeric property, its kind of quantity and what it is: the schema and the presenter both read this. */
-export const SECTION_PROPERTY_FIELDS: Record<NumericProperty, { kind: QuantityKind; description: string }> = {
+export const SECTION_PROPERTY_FIELDS: FieldTable<NumericProperty> = {
   depth: { kind: 'length', description: 'Overall depth along y.' },
   width: { kind: 'length', description: 'Overall width along z.' },
   area: { kind: 'area', description: 'Cross-section area.' },
@@ -41,9 +41,7 @@ export const SECTION_PROPERTY_FIELDS: Record<NumericProperty, { kind: QuantityKi
   thickestElement: { kind: 'length', description: 'Thickest plate element; it selects the yield strength band of a graded steel.' },
 };
 
-const propertyShape = Object.fromEntries(
-  Object.entries(SECTION_PROPERTY_FIELDS).map(([name, field]) => [name, presentedQuantity(field.kind, field.description)]),
-) as Record<NumericProperty, z.ZodNumber>;
+const propertyShape = fieldTableShape(SECTION_PROPERTY_FIELDS);
 
 export const sectionPropertiesOutput = z
   .object({

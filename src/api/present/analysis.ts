@@ -1,13 +1,9 @@
 /** Presenting reactions, diagrams, extremes and the equilibrium check in the response's units. */
 
 import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis } from '../../engine/analysis/result.js';
+import type { SampledDiagrams } from '../../engine/analysis/sample-diagrams.js';
 import { present, type OutputUnits } from '../output-units.js';
 import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
-
-export interface SampledDiagrams {
-  readonly x: readonly number[];
-  readonly values: Readonly<Record<DiagramField, readonly number[]>>;
-}
 
 export function presentReactions(analysis: MemberAnalysis, labels: readonly (string | undefined)[], units: OutputUnits) {
   return analysis.reactions.map((reaction, i) => ({
@@ -22,12 +18,19 @@ export function presentReactions(analysis: MemberAnalysis, labels: readonly (str
   }));
 }
 
-export function presentDiagrams(diagrams: SampledDiagrams, units: OutputUnits) {
-  const out: Record<string, number[]> = { x: diagrams.x.map((x) => present(units, 'length', x)) };
-  for (const field of DIAGRAM_FIELDS) {
-    const kind = DIAGRAM_FIELD_INFO[field].kind;
-    out[field] = diagrams.values[field].map((value) => present(units, kind, value));
+/** One column of SI values in a presented unit: one division a value, -0 as 0. */
+export function presentColumn(values: ArrayLike<number>, factor: number): number[] {
+  const out = new Array<number>(values.length);
+  for (let i = 0; i < values.length; i++) {
+    const value = (values[i] as number) / factor;
+    out[i] = value === 0 ? 0 : value;
   }
+  return out;
+}
+
+export function presentDiagrams(diagrams: SampledDiagrams, units: OutputUnits) {
+  const out: Record<string, number[]> = { x: presentColumn(diagrams.x, units.factors.length) };
+  for (const field of DIAGRAM_FIELDS) out[field] = presentColumn(diagrams.values[field], units.factors[DIAGRAM_FIELD_INFO[field].kind]);
   return out as Record<'x' | DiagramField, number[]>;
 }
 

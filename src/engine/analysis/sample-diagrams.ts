@@ -6,15 +6,77 @@
  * a node (point load, support, point moment, hinge), x holds the node twice, with the values just
  * left of it and then just right of it; elsewhere once. Values at or below ZERO_TOLERANCE of the
  * field's largest magnitude are 0, and no value is -0.
+ *
+ * Every answer carries its diagrams, so this runs on every request: the positions are laid out
+ * first, then each field is evaluated into a typed column. The pieces' coefficients are packed into
+ * one typed array first, because the engine's polynomials come in several array kinds (a shared
+ * frozen zero among them) and reading them in one loop is several times slower than reading one kind.
  */
 
-import { evaluatePolynomial } from './polynomial.js';
-import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis, type MemberPiece } from './result.js';
-import { JUMP_TOLERANCE, POSITION_TOLERANCE, roundedToZero } from './tolerances.js';
+import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis, type MemberPiece, type Polynomial } from './result.js';
+import { JUMP_TOLERANCE, POSITION_TOLERANCE, ZERO_TOLERANCE } from './tolerances.js';
 
 export interface SampledDiagrams {
-  readonly x: number[];
-  readonly values: Record<DiagramField, number[]>;
+  readonly x: readonly number[];
+  readonly values: Readonly<Record<DiagramField, Float64Array>>;
+}
+
+const FIELD_COUNT = DIAGRAM_FIELDS.length;
+
+/**
+ * Every piece's coefficients in one typed array, field after field in DIAGRAM_FIELDS order:
+ * polynomial j = piece x FIELD_COUNT + field takes the entries from starts[j] to starts[j + 1].
+ */
+interface PackedCoefficients {
+  readonly values: Float64Array;
+  readonly starts: Int32Array;
+}
+
+function packCoefficients(pieces: readonly MemberPiece[]): PackedCoefficients {
+  const starts = new Int32Array(pieces.length * FIELD_COUNT + 1);
+  let size = 0;
+  for (let i = 0; i < pieces.length; i++) {
+    const fields = (pieces[i] as MemberPiece).fields;
+    for (let f = 0; f < FIELD_COUNT; f++) {
+      starts[i * FIELD_COUNT + f] = size;
+      size += fields[DIAGRAM_FIELDS[f] as DiagramField].length;
+    }
+  }
+  starts[pieces.length * FIELD_COUNT] = size;
+  const values = new Float64Array(size);
+  for (let i = 0; i < pieces.length; i++) {
+    const fields = (pieces[i] as MemberPiece).fields;
+    for (let f = 0; f < FIELD_COUNT; f++) {
+      const polynomial = fields[DIAGRAM_FIELDS[f] as DiagramField] as Polynomial;
+      const start = starts[i * FIELD_COUNT + f] as number;
+      for (let c = 0; c < polynomial.length; c++) values[start + c] = polynomial[c] as number;
+    }
+  }
+  return { values, starts };
+}
+
+/** Horner's rule on polynomial j (the same operations in the same order as evaluatePolynomial). */
+function evaluate(packed: PackedCoefficients, j: number, s: number): number {
+  const { values, starts } = packed;
+  const first = starts[j] as number;
+  let value = 0;
+  for (let i = (starts[j + 1] as number) - 1; i >= first; i--) value = value * s + (values[i] as number);
+  return value;
+}
+
+/** True when some field changes across the node between pieces `piece - 1` and `piece` by more than JUMP_TOLERANCE of its scale. */
+function jumpsAt(packed: PackedCoefficients, piece: number, leftEnd: number, scales: Float64Array): boolean {
+  for (let f = 0; f < FIELD_COUNT; f++) {
+    const before = evaluate(packed, (piece - 1) * FIELD_COUNT + f, leftEnd);
+    const after = evaluate(packed, piece * FIELD_COUNT + f, 0);
+    if (Math.abs(after - before) > JUMP_TOLERANCE * (scales[f] as number)) return true;
+  }
+  return false;
+}
+
+/** Sample k of `count` evenly spaced from 0 to the length; the last is the length itself, not (count - 1) x step with its rounding. */
+function sampleAt(k: number, count: number, length: number): number {
+  return k === count - 1 ? length : (k * length) / (count - 1);
 }
 
 /** `samples` is rounded down and raised to at least 2 (both ends). */
@@ -22,45 +84,69 @@ export function sampleDiagrams(analysis: MemberAnalysis, samples: number): Sampl
   const { length, nodes, pieces } = analysis;
   const count = Math.max(2, Math.floor(Number.isFinite(samples) ? samples : 2));
   const tolerance = POSITION_TOLERANCE * length;
-  const scale = {} as Record<DiagramField, number>;
-  const values = {} as Record<DiagramField, number[]>;
-  for (const field of DIAGRAM_FIELDS) {
-    const { max, min } = analysis.extremes[field];
-    scale[field] = Math.max(Math.abs(max.value), Math.abs(min.value));
-    values[field] = [];
+  const scales = new Float64Array(FIELD_COUNT);
+  for (let f = 0; f < FIELD_COUNT; f++) {
+    const { max, min } = analysis.extremes[DIAGRAM_FIELDS[f] as DiagramField];
+    scales[f] = Math.max(Math.abs(max.value), Math.abs(min.value));
   }
-  const x: number[] = [];
-  const push = (position: number, piece: MemberPiece, s: number): void => {
-    x.push(position);
-    for (const field of DIAGRAM_FIELDS) {
-      values[field].push(roundedToZero(evaluatePolynomial(piece.fields[field], s), scale[field]));
-    }
-  };
-  const jumps = (left: MemberPiece, right: MemberPiece): boolean =>
-    DIAGRAM_FIELDS.some((field) => {
-      const before = evaluatePolynomial(left.fields[field], left.end - left.start);
-      const after = evaluatePolynomial(right.fields[field], 0);
-      return Math.abs(after - before) > JUMP_TOLERANCE * scale[field];
-    });
+  const packed = packCoefficients(pieces);
 
+  // Where each value is taken: position x, on piece `pieceOf`, at local coordinate `local`.
+  const x: number[] = [];
+  const pieceOf: number[] = [];
+  const local: number[] = [];
   let sample = 0;
-  const sampleAt = (k: number): number => (k === count - 1 ? length : (k * length) / (count - 1));
+  let samplePosition = sampleAt(0, count, length);
   for (let i = 0; i < nodes.length; i++) {
     const node = nodes[i] as number;
     const left = pieces[i - 1];
     const right = pieces[i];
-    while (sample < count && sampleAt(sample) <= node + tolerance) sample++;
-    if (left && right && jumps(left, right)) {
-      push(node, left, left.end - left.start);
-      push(node, right, 0);
-    } else if (right) push(node, right, 0);
-    else if (left) push(node, left, left.end - left.start);
+    while (sample < count && samplePosition <= node + tolerance) samplePosition = sampleAt(++sample, count, length);
+    if (left && right && jumpsAt(packed, i, left.end - left.start, scales)) {
+      x.push(node, node);
+      pieceOf.push(i - 1, i);
+      local.push(left.end - left.start, 0);
+    } else if (right) {
+      x.push(node);
+      pieceOf.push(i);
+      local.push(0);
+    } else if (left) {
+      x.push(node);
+      pieceOf.push(i - 1);
+      local.push(left.end - left.start);
+    }
     if (!right) break;
     const next = nodes[i + 1] as number;
-    for (; sample < count && sampleAt(sample) < next - tolerance; sample++) {
-      const position = sampleAt(sample);
-      push(position, right, position - right.start);
+    for (; sample < count && samplePosition < next - tolerance; samplePosition = sampleAt(++sample, count, length)) {
+      x.push(samplePosition);
+      pieceOf.push(i);
+      local.push(samplePosition - right.start);
     }
+  }
+
+  // Positions come piece by piece, in order: each field is evaluated a run of positions at a time.
+  const runEnds: number[] = [];
+  for (let k = 1; k <= x.length; k++) if (k === x.length || pieceOf[k] !== pieceOf[k - 1]) runEnds.push(k);
+  const { values: coefficients, starts } = packed;
+  const values = {} as Record<DiagramField, Float64Array>;
+  for (let f = 0; f < FIELD_COUNT; f++) {
+    const column = new Float64Array(x.length);
+    const zeroBelow = ZERO_TOLERANCE * (scales[f] as number);
+    let k = 0;
+    for (const end of runEnds) {
+      const j = (pieceOf[k] as number) * FIELD_COUNT + f;
+      const first = starts[j] as number;
+      const last = (starts[j + 1] as number) - 1;
+      for (; k < end; k++) {
+        const s = local[k] as number;
+        // Horner's rule, as evaluatePolynomial does it.
+        let value = 0;
+        for (let i = last; i >= first; i--) value = value * s + (coefficients[i] as number);
+        // Rounding noise of the field's scale is 0, and -0 is 0.
+        column[k] = Math.abs(value) <= zeroBelow ? 0 : value;
+      }
+    }
+    values[DIAGRAM_FIELDS[f] as DiagramField] = column;
   }
   return { x, values };
 }

@@ -5,7 +5,10 @@
 
 import { randomUUID } from 'node:crypto';
 import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import { AnswerCache, DEFAULT_ANSWER_CACHE_BYTES } from './api/answer-cache.js';
 import { problemFromError, registerErrorHandler, sendProblem } from './api/error-handler.js';
+import { registerJsonBody } from './api/json-body.js';
+import { OneLinePerRequest } from './api/request-log.js';
 import { RouteTable } from './api/method-not-allowed.js';
 import { buildOpenApiDocument } from './api/openapi/document.js';
 import { ProblemError } from './api/problems.js';
@@ -31,6 +34,8 @@ export interface AppOptions {
   /** Largest accepted batch body, bytes; default 16 MiB. */
   readonly batchBodyLimit?: number;
   readonly logger?: FastifyServerOptions['logger'];
+  /** What remembered answers may take, bytes; 0 turns the answer cache off. Default 32 MiB. */
+  readonly answerCacheBytes?: number;
 }
 
 export const DEFAULT_BODY_LIMIT = 1024 * 1024;
@@ -45,6 +50,7 @@ const REQUEST_ID = /^[\w.:-]{1,128}$/;
 export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
   const app = Fastify({
     logger: options.logger ?? false,
+    logController: new OneLinePerRequest(),
     bodyLimit: options.bodyLimit ?? DEFAULT_BODY_LIMIT,
     requestIdHeader: false,
     genReqId: (request) => {
@@ -64,6 +70,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   });
   // JSON only: without this Fastify would also take text/plain bodies.
   app.removeContentTypeParser('text/plain');
+  registerJsonBody(app);
   registerErrorHandler(app);
   prepareGracefulShutdown(app);
 
@@ -81,6 +88,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   let ready = false;
   const catalogues = options.catalogues ?? (await loadCatalogues({ companyPath: options.companyCataloguePath }));
   const document = buildOpenApiDocument(routeContracts());
+  const answers = new AnswerCache(options.answerCacheBytes ?? DEFAULT_ANSWER_CACHE_BYTES);
 
   await app.register(docsRoutes(document));
   await app.register(
@@ -90,10 +98,10 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
       sectionFamilies: catalogues.sectionFamilies,
     })),
   );
-  await app.register(memberCheckRoutes(catalogues));
+  await app.register(memberCheckRoutes(catalogues, answers));
   await app.register(memberCheckBatchRoutes(catalogues, options.batchBodyLimit ?? DEFAULT_BATCH_BODY_LIMIT));
-  await app.register(memberSizingRoutes(catalogues));
-  await app.register(sectionPropertiesRoutes(catalogues));
+  await app.register(memberSizingRoutes(catalogues, answers));
+  await app.register(sectionPropertiesRoutes(catalogues, answers));
   await app.register(sectionRoutes(catalogues));
   await app.register(materialRoutes(catalogues));
   await app.ready();

@@ -1,5 +1,6 @@
 /** The service process: configuration from the environment, listen, and a graceful shutdown. */
 
+import { DEFAULT_ANSWER_CACHE_BYTES } from './api/answer-cache.js';
 import { DEFAULT_BATCH_BODY_LIMIT } from './api/routes/member-check-batch.js';
 import { buildApp, DEFAULT_BODY_LIMIT } from './app.js';
 
@@ -19,6 +20,7 @@ async function main(): Promise<void> {
     logger: { level: process.env.LOG_LEVEL ?? 'info' },
     bodyLimit: integerFromEnvironment('BODY_LIMIT_BYTES', DEFAULT_BODY_LIMIT, 1),
     batchBodyLimit: integerFromEnvironment('BATCH_BODY_LIMIT_BYTES', DEFAULT_BATCH_BODY_LIMIT, 1),
+    answerCacheBytes: integerFromEnvironment('ANSWER_CACHE_BYTES', DEFAULT_ANSWER_CACHE_BYTES, 0),
     companyCataloguePath: process.env.MEMBERPROOF_CATALOGUES || undefined,
   });
   // PORT=0 takes any free port (the tests use it).

@@ -72,15 +72,36 @@ function siUnitFor(kind: QuantityKind, unit: Unit): string {
   return expectsAngle && !hasAngle && kind !== 'angle' ? si.replace('/rad', '') : si;
 }
 
-export type QuantityResult = { ok: true; value: number } | { ok: false; message: string };
+export type QuantityResult = { readonly ok: true; readonly value: number } | { readonly ok: false; readonly message: string };
 
 const MAX_QUANTITY_STRING = 64;
+
+/**
+ * Parsing a unit string with mathjs costs tens of microseconds, and a configurator sends the same few
+ * strings ("2.7 m", "-5 kN/m") again and again: results are remembered by kind and text. Bounded by
+ * starting afresh once it holds STRINGS_REMEMBERED entries.
+ */
+const STRINGS_REMEMBERED = 4096;
+const parsedStrings = new Map<string, QuantityResult>();
+
+function remembered<T>(cache: Map<string, T>, key: string, compute: () => T): T {
+  const known = cache.get(key);
+  if (known !== undefined) return known;
+  const result = compute();
+  if (cache.size >= STRINGS_REMEMBERED) cache.clear();
+  cache.set(key, result);
+  return result;
+}
 
 /** A number (already SI) or a unit string, as an SI number of the given kind. */
 export function quantityToSI(input: number | string, kind: QuantityKind): QuantityResult {
   if (typeof input === 'number') {
     return Number.isFinite(input) ? { ok: true, value: input } : { ok: false, message: 'must be a finite number' };
   }
+  return remembered(parsedStrings, `${kind}\n${input}`, () => parseQuantity(input, kind));
+}
+
+function parseQuantity(input: string, kind: QuantityKind): QuantityResult {
   const text = input.trim();
   if (text.length === 0 || text.length > MAX_QUANTITY_STRING) {
     return { ok: false, message: `must be a number in ${QUANTITY_KINDS[kind]} or a string such as "${example(kind)}"` };
@@ -104,8 +125,14 @@ export function quantityToSI(input: number | string, kind: QuantityKind): Quanti
   return { ok: true, value };
 }
 
+const parsedUnitNames = new Map<string, number | null>();
+
 /** How many SI units one of `unitName` is, when `unitName` is a unit of the kind; undefined otherwise. */
 export function unitFactorToSI(unitName: string, kind: QuantityKind): number | undefined {
+  return remembered(parsedUnitNames, `${kind}\n${unitName}`, () => parseUnitFactor(unitName, kind) ?? null) ?? undefined;
+}
+
+function parseUnitFactor(unitName: string, kind: QuantityKind): number | undefined {
   let unit: Unit;
   try {
     // A unit name only: "kN", not "2 kN".

@@ -105,3 +105,22 @@ describe('odd units', () => {
     expect(unitFactorToSI('0 m', 'length')).toBeUndefined();
   });
 });
+
+describe('remembered unit strings', () => {
+  it('answer the same the second time, for good and bad strings alike, and per kind', () => {
+    expect(si('2.7 m', 'length')).toBe(2.7);
+    expect(si('2.7 m', 'length')).toBe(2.7);
+    expect(quantityToSI('2.7 m', 'force')).toEqual({ ok: false, message: '"2.7 m" is not a force (expected a unit like N)' });
+    expect(quantityToSI('2.7 m', 'force')).toEqual(quantityToSI('2.7 m', 'force'));
+    expect(unitFactorToSI('kN', 'force')).toBe(1000);
+    expect(unitFactorToSI('kN', 'length')).toBeUndefined();
+    expect(unitFactorToSI('kN', 'length')).toBeUndefined();
+  });
+
+  it('stay right past the bound, when the memory starts afresh', () => {
+    // mathjs converts mm to m within a few ulps.
+    for (let i = 0; i < 5000; i++) expect(Math.abs(si(`${i} mm`, 'length') - i / 1000)).toBeLessThanOrEqual(4e-15 * Math.max(1, i / 1000));
+    expect(si('0 mm', 'length')).toBe(0);
+    expect(si('4999 mm', 'length')).toBeCloseTo(4.999, 14);
+  });
+});

@@ -3,12 +3,11 @@
 import type { FastifyInstance } from 'fastify';
 import { SCREENING_CAUTION } from '../../engine/caution.js';
 import { problemFromError } from '../error-handler.js';
-import { assertFinite } from '../finite-guard.js';
+import { finiteJson, sendJsonText } from '../answer-json.js';
 import { runMemberCheck, type Catalogues } from '../member-check.js';
 import { PROBLEMS, ProblemError } from '../problems.js';
 import type { RouteContract } from '../route-contract.js';
 import { BATCH_EXAMPLE, batchEnvelope, batchItem, batchRequest, batchResponse, MAX_BATCH_ITEMS } from '../schemas/batch-exchange.js';
-import type { MemberCheckResponse } from '../schemas/member-check-response.js';
 import { DEFAULT_SAMPLES } from '../schemas/output-options.js';
 import { parseBody } from '../validation.js';
 
@@ -28,8 +27,9 @@ export const memberCheckBatchContract: RouteContract = {
   exampleBody: BATCH_EXAMPLE,
 };
 
+/** One item's outcome; a result is kept as its JSON text, serialised (and guarded) once. */
 type BatchOutcome =
-  | { index: number; id?: string | number; status: 200; result: MemberCheckResponse }
+  | { index: number; id?: string | number; status: 200; resultJson: string; verdict: 'pass' | 'fail'; utilization: number }
   | { index: number; id?: string | number; status: number; error: ReturnType<ProblemError['body']> };
 
 /** Diagram points over all items bound the size of the answer (each point carries 12 numbers). */
@@ -52,8 +52,7 @@ function checkItem(item: unknown, index: number, catalogues: Catalogues, instanc
   try {
     const { id: _id, ...body } = parseBody(batchItem, item, ['items', index]);
     const result = runMemberCheck(body, catalogues, ['items', index]);
-    assertFinite(result);
-    return { ...withId, status: 200, result };
+    return { ...withId, status: 200, resultJson: finiteJson(result), verdict: result.verdict, utilization: result.governing?.utilization ?? 0 };
   } catch (error) {
     const problem = problemFromError(error);
     if (!problem) throw error;
@@ -61,9 +60,16 @@ function checkItem(item: unknown, index: number, catalogues: Catalogues, instanc
   }
 }
 
+/** An outcome as JSON.stringify would write it (index, id, status, then result or error), the result's text spliced in. */
+function outcomeJson(outcome: BatchOutcome): string {
+  if (!('resultJson' in outcome)) return JSON.stringify(outcome);
+  const id = outcome.id === undefined ? '' : `,"id":${JSON.stringify(outcome.id)}`;
+  return `{"index":${outcome.index}${id},"status":200,"result":${outcome.resultJson}}`;
+}
+
 export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-checks/batch', { bodyLimit }, async (request) => {
+    app.post('/v1/member-checks/batch', { bodyLimit }, async (request, reply) => {
       const { items } = parseBody(batchEnvelope, request.body);
       if (items.length > MAX_BATCH_ITEMS) {
         throw new ProblemError('tooManyItems', `The batch holds ${items.length} items; at most ${MAX_BATCH_ITEMS} are accepted.`, [{ pointer: '/items', message: `at most ${MAX_BATCH_ITEMS} items` }]);
@@ -77,23 +83,20 @@ export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number
       let fail = 0;
       let worst: { utilization: number; index: number } | undefined;
       for (const outcome of results) {
-        if (!('result' in outcome)) continue;
-        if (outcome.result.verdict === 'pass') pass++;
+        if (!('resultJson' in outcome)) continue;
+        if (outcome.verdict === 'pass') pass++;
         else fail++;
-        const utilization = outcome.result.governing?.utilization ?? 0;
-        if (worst === undefined || utilization > worst.utilization) worst = { utilization, index: outcome.index };
+        if (worst === undefined || outcome.utilization > worst.utilization) worst = { utilization: outcome.utilization, index: outcome.index };
       }
-      return {
-        results,
-        summary: {
-          total: results.length,
-          pass,
-          fail,
-          error: results.length - pass - fail,
-          ...(worst === undefined ? {} : { worstUtilization: worst.utilization, worstIndex: worst.index }),
-        },
-        notices: [SCREENING_CAUTION],
+      const summary = {
+        total: results.length,
+        pass,
+        fail,
+        error: results.length - pass - fail,
+        ...(worst === undefined ? {} : { worstUtilization: worst.utilization, worstIndex: worst.index }),
       };
+      const resultsJson = results.map(outcomeJson).join(',');
+      return sendJsonText(reply, `{"results":[${resultsJson}],"summary":${finiteJson(summary)},"notices":${JSON.stringify([SCREENING_CAUTION])}}`);
     });
   };
 }

@@ -1,7 +1,7 @@
 /** POST /v1/member-checks: analyse and check one member. */
 
 import type { FastifyInstance } from 'fastify';
-import { assertFinite } from '../finite-guard.js';
+import { answerOnce, type AnswerCache } from '../answer-cache.js';
 import { runMemberCheck, type Catalogues } from '../member-check.js';
 import type { RouteContract } from '../route-contract.js';
 import { MEMBER_CHECK_EXAMPLE, memberCheckRequest } from '../schemas/member-check-request.js';
@@ -23,13 +23,10 @@ export const memberCheckContract: RouteContract = {
   exampleBody: MEMBER_CHECK_EXAMPLE,
 };
 
-export function memberCheckRoutes(catalogues: Catalogues) {
+export function memberCheckRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-checks', async (request) => {
-      const body = parseBody(memberCheckRequest, request.body);
-      const result = runMemberCheck(body, catalogues);
-      assertFinite(result);
-      return result;
-    });
+    app.post('/v1/member-checks', async (request, reply) =>
+      answerOnce(answers, request, reply, () => runMemberCheck(parseBody(memberCheckRequest, request.body), catalogues)),
+    );
   };
 }

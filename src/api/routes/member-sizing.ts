@@ -1,7 +1,7 @@
 /** POST /v1/member-sizing */
 
 import type { FastifyInstance } from 'fastify';
-import { assertFinite } from '../finite-guard.js';
+import { answerOnce, type AnswerCache } from '../answer-cache.js';
 import type { LoadedCatalogues } from '../load-catalogues.js';
 import { runMemberSizing } from '../member-sizing.js';
 import type { RouteContract } from '../route-contract.js';
@@ -23,12 +23,10 @@ export const memberSizingContract: RouteContract = {
   exampleBody: MEMBER_SIZING_EXAMPLE,
 };
 
-export function memberSizingRoutes(catalogues: LoadedCatalogues) {
+export function memberSizingRoutes(catalogues: LoadedCatalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-sizing', async (request) => {
-      const result = runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues);
-      assertFinite(result);
-      return result;
-    });
+    app.post('/v1/member-sizing', async (request, reply) =>
+      answerOnce(answers, request, reply, () => runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues)),
+    );
   };
 }

@@ -2,7 +2,7 @@
 
 import type { FastifyInstance } from 'fastify';
 import { SCREENING_CAUTION } from '../../engine/caution.js';
-import { assertFinite } from '../finite-guard.js';
+import { answerOnce, type AnswerCache } from '../answer-cache.js';
 import type { Catalogues } from '../member-check.js';
 import { resolveMaterial } from '../normalise/material.js';
 import { QuantityReader } from '../normalise/quantity-reader.js';
@@ -28,9 +28,9 @@ export const sectionPropertiesContract: RouteContract = {
   exampleBody: SECTION_PROPERTIES_EXAMPLE,
 };
 
-export function sectionPropertiesRoutes(catalogues: Catalogues) {
+export function sectionPropertiesRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/section-properties', async (request) => {
+    app.post('/v1/section-properties', async (request, reply) => answerOnce(answers, request, reply, () => {
       const body = parseBody(sectionPropertiesRequest, request.body);
       const reader = new QuantityReader();
       const section = resolveSection(body.section, catalogues.sections, reader, ['section']);
@@ -39,9 +39,7 @@ export function sectionPropertiesRoutes(catalogues: Catalogues) {
       reader.finish();
       const resolved = section();
       const density = material?.density;
-      const result = { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION] };
-      assertFinite(result);
-      return result;
-    });
+      return { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION] };
+    }));
   };
 }

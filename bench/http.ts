@@ -1,0 +1,180 @@
+/**
+ * `npm run bench:http`: the request path against a bare Fastify route, over real sockets, on this
+ * machine. It starts the built service (dist/main.js, default logging to /dev/null) twice, once as it
+ * runs by default and once with the answer cache off, and the bare route of bench/bare-route.ts
+ * sending the service's answer bytes; then loads them in turn with autocannon (16 connections, 5 s a
+ * run, three rounds: bare, service, service without cache), and prints requests per second and the
+ * ratios within each round. After that, on the service without cache: a batch of 1,000 typical checks
+ * (11 samples each) and a sizing over 103 catalogue candidates through their routes (11 requests each,
+ * median), and the engine alone for the typical check (median).
+ *
+ * Targets (issue 9): typical check >= 0.8 x the bare route; batch <= 150 ms; sizing <= 15 ms;
+ * engine <= 20 us. Ratios taken within a round share the machine's state, so they are what to compare.
+ */
+
+import { spawn, type ChildProcess } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import autocannon from 'autocannon';
+import { TYPICAL_CHECK } from './typical-checks.js';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+const SECONDS_PER_RUN = Number(process.env.BENCH_SECONDS ?? 5);
+const ROUNDS = 3;
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.once('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const address = server.address();
+      server.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
+    });
+  });
+}
+
+interface Started {
+  readonly name: string;
+  readonly url: string;
+  readonly child: ChildProcess;
+}
+
+async function start(name: string, args: string[], env: Record<string, string>): Promise<Started> {
+  const port = await freePort();
+  const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'ignore', 'inherit'] });
+  const url = `http://127.0.0.1:${port}`;
+  for (let attempt = 0; attempt < 200; attempt++) {
+    const ready = await fetch(`${url}/v1/member-checks`, { method: 'OPTIONS' }).then(
+      () => true,
+      () => false,
+    );
+    if (ready) return { name, url, child };
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  child.kill();
+  throw new Error(`${name} did not start`);
+}
+
+async function post(url: string, body: string): Promise<{ status: number; text: string; ms: number }> {
+  const began = performance.now();
+  const response = await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body });
+  const text = await response.text();
+  return { status: response.status, text, ms: performance.now() - began };
+}
+
+async function load(target: Started, body: string): Promise<{ rps: number; p99: number; errors: number }> {
+  const result = await autocannon({
+    url: `${target.url}/v1/member-checks`,
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body,
+    connections: 16,
+    duration: SECONDS_PER_RUN,
+  });
+  return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.non2xx };
+}
+
+async function medianMs(url: string, body: string, runs = 11): Promise<{ median: number; bytes: number }> {
+  const first = await post(url, body);
+  if (first.status !== 200) throw new Error(`${url}: ${first.status} ${first.text.slice(0, 300)}`);
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) times.push((await post(url, body)).ms);
+  times.sort((a, b) => a - b);
+  return { median: times[Math.floor(runs / 2)] as number, bytes: first.text.length };
+}
+
+function batchBody(): string {
+  const items = Array.from({ length: 1000 }, (_, i) => ({
+    id: `bay-${i}`,
+    ...TYPICAL_CHECK,
+    loads: [{ ...TYPICAL_CHECK.loads[0], fy: -4000 - i }, ...TYPICAL_CHECK.loads.slice(1)],
+    output: { samples: 11 },
+  }));
+  return JSON.stringify({ items });
+}
+
+const SIZING = JSON.stringify({
+  member: { length: 3, supports: [{ position: 0, type: 'pinned' }, { position: 3, type: 'roller' }] },
+  material: { grade: 'S355' },
+  loads: [
+    { type: 'distributed', from: 0, to: 3, qy: -6000 },
+    { type: 'point', position: 1.1, fy: -4000 },
+  ],
+  selfWeight: true,
+  output: { samples: 11 },
+  candidates: { families: ['IPE', 'HEA', 'HEB', 'SHS', 'RHS'] },
+});
+
+async function engineMicros(): Promise<number> {
+  const { checkRequest } = await import(join(root, 'dist/api/member-check.js'));
+  const { loadCatalogues } = await import(join(root, 'dist/api/load-catalogues.js'));
+  const { memberCheckRequest } = await import(join(root, 'dist/api/schemas/member-check-request.js'));
+  const { analyseMember } = await import(join(root, 'dist/engine/analysis/analyse-member.js'));
+  const { checkMember } = await import(join(root, 'dist/engine/checks/check-member.js'));
+  const { check, checked } = checkRequest(memberCheckRequest.parse(TYPICAL_CHECK), await loadCatalogues({}));
+  const engine = () => {
+    const analysis = analyseMember(checked.model);
+    return checkMember({ analysis, model: checked.model, section: checked.section.properties, material: checked.material, criteria: check.criteria, buckling: check.buckling, lateralTorsional: check.lateralTorsional, pins: check.pins });
+  };
+  for (let i = 0; i < 5000; i++) engine();
+  const times: number[] = [];
+  for (let round = 0; round < 401; round++) {
+    const began = process.hrtime.bigint();
+    for (let i = 0; i < 25; i++) engine();
+    times.push(Number(process.hrtime.bigint() - began) / 25 / 1000);
+  }
+  times.sort((a, b) => a - b);
+  return times[200] as number;
+}
+
+const body = JSON.stringify(TYPICAL_CHECK);
+const service = await start('service', ['dist/main.js'], {});
+const uncached = await start('service, answer cache off', ['dist/main.js'], { ANSWER_CACHE_BYTES: '0' });
+const answer = await post(`${uncached.url}/v1/member-checks`, body);
+const cachedAnswer = await post(`${service.url}/v1/member-checks`, body);
+if (answer.status !== 200 || cachedAnswer.text !== answer.text) throw new Error('the two services answer differently');
+const answerFile = join(tmpdir(), `memberproof-bench-answer-${process.pid}.json`);
+writeFileSync(answerFile, answer.text);
+const bare = await start('bare Fastify route', ['--import', 'tsx', 'bench/bare-route.ts'], { ANSWER_FILE: answerFile });
+const bareAnswer = await post(`${bare.url}/v1/member-checks`, body);
+if (bareAnswer.text !== answer.text) throw new Error('the bare route does not send the same bytes');
+
+const lines = [
+  `Typical check, ${(answer.text.length / 1024).toFixed(1)} kB answer; autocannon 16 connections, ${SECONDS_PER_RUN} s a run, ${ROUNDS} rounds in turn.`,
+  '',
+  '| round | bare route (req/s) | service (req/s) | ratio | service, cache off (req/s) | ratio | p99 bare / service / cache off (ms) |',
+  '| --- | ---: | ---: | ---: | ---: | ---: | ---: |',
+];
+const ratios: number[] = [];
+const uncachedRatios: number[] = [];
+for (let round = 1; round <= ROUNDS; round++) {
+  const a = await load(bare, body);
+  const b = await load(service, body);
+  const c = await load(uncached, body);
+  if (a.errors + b.errors + c.errors > 0) throw new Error(`errors under load: ${a.errors} ${b.errors} ${c.errors}`);
+  ratios.push(b.rps / a.rps);
+  uncachedRatios.push(c.rps / a.rps);
+  lines.push(`| ${round} | ${a.rps.toFixed(0)} | ${b.rps.toFixed(0)} | ${(b.rps / a.rps).toFixed(2)} | ${c.rps.toFixed(0)} | ${(c.rps / a.rps).toFixed(2)} | ${a.p99} / ${b.p99} / ${c.p99} |`);
+}
+const median = (values: number[]) => [...values].sort((x, y) => x - y)[Math.floor(values.length / 2)] as number;
+const batch = await medianMs(`${uncached.url}/v1/member-checks/batch`, batchBody());
+const sizing = await medianMs(`${uncached.url}/v1/member-sizing`, SIZING);
+for (const started of [service, uncached, bare]) started.child.kill('SIGTERM');
+const engine = await engineMicros();
+
+lines.push(
+  '',
+  '| target | measured | goal |',
+  '| --- | ---: | ---: |',
+  `| typical check, service / bare route (median of rounds) | ${median(ratios).toFixed(2)} | >= 0.80 |`,
+  `| typical check, service with the answer cache off / bare route | ${median(uncachedRatios).toFixed(2)} | (every request computed) |`,
+  `| batch of 1,000 typical checks, 11 samples each, through the route (median of 11, cache off) | ${batch.median.toFixed(1)} ms (${(batch.bytes / 2 ** 20).toFixed(1)} MiB answer) | <= 150 ms |`,
+  `| sizing over 103 catalogue candidates through the route (median of 11, cache off) | ${sizing.median.toFixed(1)} ms | <= 15 ms |`,
+  `| engine alone (analyseMember + checkMember), typical check, median | ${engine.toFixed(1)} us | <= 20 us |`,
+  '',
+  `Node ${process.version}, ${process.platform} ${process.arch}.`,
+);
+console.log(lines.join('\n'));

@@ -7,7 +7,7 @@ import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
 
 export function presentReactions(analysis: MemberAnalysis, labels: readonly (string | undefined)[], units: OutputUnits) {
   return analysis.reactions.map((reaction, i) => ({
-    ...(labels[i] === undefined ? {} : { label: labels[i] }),
+    label: labels[i],
     position: present(units, 'length', reaction.position),
     fx: present(units, 'force', reaction.fx),
     fy: present(units, 'force', reaction.fy),
@@ -18,12 +18,15 @@ export function presentReactions(analysis: MemberAnalysis, labels: readonly (str
   }));
 }
 
-/** One column of SI values in a presented unit: one division a value, -0 as 0. */
+/**
+ * One column of SI values in a presented unit: one division a value, -0 as 0. Filled by push, so the
+ * array is packed: JSON.stringify writes a packed array of doubles about a quarter faster than a holey one.
+ */
 export function presentColumn(values: ArrayLike<number>, factor: number): number[] {
-  const out = new Array<number>(values.length);
+  const out: number[] = [];
   for (let i = 0; i < values.length; i++) {
     const value = (values[i] as number) / factor;
-    out[i] = value === 0 ? 0 : value;
+    out.push(value === 0 ? 0 : value);
   }
   return out;
 }

@@ -1,4 +1,8 @@
-/** Presenting the failure checks in the response's units; null values are left out, never sent as null. */
+/**
+ * Presenting the failure checks in the response's units; null values are left out, never sent as null.
+ * Every object is written with all its keys in contract order, an absent value as undefined, which JSON
+ * leaves out: one shape per kind of object instead of spreads that make a new one each time.
+ */
 
 import type { BucklingAxisResult, CheckQuantity, MemberCheckOutcome, StressExtreme } from '../../engine/checks/check-outcome.js';
 import { present, type OutputUnits } from '../output-units.js';
@@ -12,9 +16,9 @@ const CHECK_KINDS: Record<CheckQuantity, 'stress' | 'force' | 'moment' | 'deflec
   angle: 'angle',
 };
 
-
-function optional<T, U>(value: T | null | undefined, key: string, map: (value: T) => U): Record<string, U> {
-  return value === null || value === undefined ? {} : { [key]: map(value) };
+/** A length that may be absent, in the presented unit. */
+function optionalLength(units: OutputUnits, value: number | null | undefined): number | undefined {
+  return value === null || value === undefined ? undefined : present(units, 'length', value);
 }
 
 function presentAxis(axis: BucklingAxisResult, units: OutputUnits) {
@@ -27,15 +31,15 @@ function presentAxis(axis: BucklingAxisResult, units: OutputUnits) {
     criticalLoad: present(units, 'force', axis.criticalLoad),
     effectiveLength: present(units, 'length', axis.effectiveLength),
     effectiveLengthFactor: axis.effectiveLengthFactor,
-    ...optional(axis.safetyFactor, 'safetyFactor', (v) => v),
+    safetyFactor: axis.safetyFactor ?? undefined,
   };
 }
 
 function presentStress(extreme: StressExtreme, units: OutputUnits) {
   return {
     value: present(units, 'stress', extreme.value),
-    ...optional(extreme.position, 'position', (v) => present(units, 'length', v)),
-    ...optional(extreme.location, 'location', (v) => v),
+    position: optionalLength(units, extreme.position),
+    location: extreme.location ?? undefined,
   };
 }
 
@@ -50,33 +54,32 @@ export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits) {
         quantity: kind,
         demand: present(units, kind, check.demand),
         capacity: present(units, kind, check.capacity),
-        ...optional(check.safetyFactor, 'safetyFactor', (v) => v),
+        safetyFactor: check.safetyFactor ?? undefined,
         requiredSafetyFactor: check.requiredSafetyFactor,
         utilization: check.utilization,
         passes: check.passes,
-        ...optional(check.position, 'position', (v) => present(units, 'length', v)),
-        ...optional(check.location, 'location', (v) => v),
+        position: optionalLength(units, check.position),
+        location: check.location ?? undefined,
         basis: check.basis,
       };
     }),
     notApplicable: outcome.notApplicable.map(({ mode, reason }) => ({ mode, reason })),
-    ...(governing === null
-      ? {}
-      : {
-          governing: {
+    governing:
+      governing === null
+        ? undefined
+        : {
             mode: governing.mode,
             utilization: governing.utilization,
             safetyFactor: governing.safetyFactor,
-            ...optional(governing.position, 'position', (v) => present(units, 'length', v)),
-            ...optional(governing.location, 'location', (v) => v),
+            position: optionalLength(units, governing.position),
+            location: governing.location ?? undefined,
           },
-        }),
     verdict: outcome.verdict,
     buckling: { governing: presentAxis(outcome.buckling.governing, units), axes: outcome.buckling.axes.map((axis) => presentAxis(axis, units)) },
-    ...(ltb === null
-      ? {}
-      : {
-          lateralTorsionalBuckling: {
+    lateralTorsionalBuckling:
+      ltb === null
+        ? undefined
+        : {
             from: present(units, 'length', ltb.from),
             to: present(units, 'length', ltb.to),
             unbracedLength: present(units, 'length', ltb.unbracedLength),
@@ -84,7 +87,6 @@ export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits) {
             momentGradientFactor: ltb.momentGradientFactor,
             criticalMoment: present(units, 'moment', ltb.criticalMoment),
           },
-        }),
     stresses: {
       axialTension: presentStress(stresses.axialTension, units),
       axialCompression: presentStress(stresses.axialCompression, units),

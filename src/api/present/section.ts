@@ -19,7 +19,7 @@ export function presentSectionProperties(properties: SectionProperties, units: O
       z: present(units, 'length', point.z),
       label: point.label,
     })),
-    ...(density === undefined ? {} : { massPerLength: present(units, 'massPerLength', properties.area * density) }),
+    massPerLength: density === undefined ? undefined : present(units, 'massPerLength', properties.area * density),
   };
 }
 
@@ -30,16 +30,13 @@ export function presentSection(section: ResolvedSection, units: OutputUnits, den
     else dimensions[key] = present(units, section.dimensions.shape === 'custom' ? (CUSTOM_DIMENSION_KINDS[key] ?? 'length') : 'length', value);
   }
   const entry = section.entry;
+  // Absent values are undefined, which JSON leaves out.
   return {
-    ...(entry === undefined
-      ? {}
-      : {
-          designation: entry.designation,
-          family: entry.family,
-          standard: entry.standard,
-          source: entry.source,
-          nominalMassPerLength: present(units, 'massPerLength', entry.massPerLength),
-        }),
+    designation: entry?.designation,
+    family: entry?.family,
+    standard: entry?.standard,
+    source: entry?.source,
+    nominalMassPerLength: entry === undefined ? undefined : present(units, 'massPerLength', entry.massPerLength),
     dimensions,
     properties: presentSectionProperties(section.properties, units, density),
   };

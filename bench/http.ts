@@ -6,7 +6,8 @@
  * run, three rounds: bare, service, service without cache), and prints requests per second and the
  * ratios within each round. After that, on the service without cache: a batch of 1,000 typical checks
  * (11 samples each) and a sizing over 103 catalogue candidates through their routes (11 requests each,
- * median), and the engine alone for the typical check (median).
+ * median), the time per request as loads and spans grow tenfold, and the engine alone for the
+ * typical check (median).
  *
  * Targets (issue 9): typical check >= 0.8 x the bare route; batch <= 150 ms; sizing <= 15 ms;
  * engine <= 20 us. Ratios taken within a round share the machine's state, so they are what to compare.
@@ -108,6 +109,31 @@ const SIZING = JSON.stringify({
   candidates: { families: ['IPE', 'HEA', 'HEB', 'SHS', 'RHS'] },
 });
 
+/** The typical check with n point loads spread over the span. */
+function withPointLoads(n: number): string {
+  const loads = Array.from({ length: n }, (_, i) => ({ type: 'point', position: (4 * (i + 0.5)) / n, fy: -1000 - i }));
+  return JSON.stringify({ ...TYPICAL_CHECK, loads });
+}
+
+/** The typical section on n spans of 4 m under a uniform load. */
+function withSpans(n: number): string {
+  const supports = Array.from({ length: n + 1 }, (_, i) => ({ position: 4 * i, type: i === 0 ? 'pinned' : 'roller' }));
+  return JSON.stringify({ ...TYPICAL_CHECK, member: { length: 4 * n, supports }, loads: [{ type: 'distributed', from: 0, to: 4 * n, qy: -1500 }] });
+}
+
+/** End to end through the route: time per request as loads or spans grow tenfold (median of 11); 1,000 supports at most, so 100 spans. */
+async function growth(url: string): Promise<string[]> {
+  const rows: [string, number][] = [];
+  for (const n of [10, 100, 1000]) rows.push([`${n} point loads`, (await medianMs(`${url}/v1/member-checks`, withPointLoads(n))).median]);
+  for (const n of [10, 100]) rows.push([`${n} spans`, (await medianMs(`${url}/v1/member-checks`, withSpans(n))).median]);
+  const lines = ['| member (101 samples, every node added) | ms per request | x the row above |', '| --- | ---: | ---: |'];
+  rows.forEach(([name, ms], i) => {
+    const growthFactor = i === 0 || i === 3 ? '' : (ms / (rows[i - 1] as [string, number])[1]).toFixed(1);
+    lines.push(`| ${name} | ${ms.toFixed(2)} | ${growthFactor} |`);
+  });
+  return lines;
+}
+
 async function engineMicros(): Promise<number> {
   const { checkRequest } = await import(join(root, 'dist/api/member-check.js'));
   const { loadCatalogues } = await import(join(root, 'dist/api/load-catalogues.js'));
@@ -130,51 +156,66 @@ async function engineMicros(): Promise<number> {
   return times[200] as number;
 }
 
-const body = JSON.stringify(TYPICAL_CHECK);
-const service = await start('service', ['dist/main.js'], {});
-const uncached = await start('service, answer cache off', ['dist/main.js'], { ANSWER_CACHE_BYTES: '0' });
-const answer = await post(`${uncached.url}/v1/member-checks`, body);
-const cachedAnswer = await post(`${service.url}/v1/member-checks`, body);
-if (answer.status !== 200 || cachedAnswer.text !== answer.text) throw new Error('the two services answer differently');
-const answerFile = join(tmpdir(), `memberproof-bench-answer-${process.pid}.json`);
-writeFileSync(answerFile, answer.text);
-const bare = await start('bare Fastify route', ['--import', 'tsx', 'bench/bare-route.ts'], { ANSWER_FILE: answerFile });
-const bareAnswer = await post(`${bare.url}/v1/member-checks`, body);
-if (bareAnswer.text !== answer.text) throw new Error('the bare route does not send the same bytes');
-
-const lines = [
-  `Typical check, ${(answer.text.length / 1024).toFixed(1)} kB answer; autocannon 16 connections, ${SECONDS_PER_RUN} s a run, ${ROUNDS} rounds in turn.`,
-  '',
-  '| round | bare route (req/s) | service (req/s) | ratio | service, cache off (req/s) | ratio | p99 bare / service / cache off (ms) |',
-  '| --- | ---: | ---: | ---: | ---: | ---: | ---: |',
-];
-const ratios: number[] = [];
-const uncachedRatios: number[] = [];
-for (let round = 1; round <= ROUNDS; round++) {
-  const a = await load(bare, body);
-  const b = await load(service, body);
-  const c = await load(uncached, body);
-  if (a.errors + b.errors + c.errors > 0) throw new Error(`errors under load: ${a.errors} ${b.errors} ${c.errors}`);
-  ratios.push(b.rps / a.rps);
-  uncachedRatios.push(c.rps / a.rps);
-  lines.push(`| ${round} | ${a.rps.toFixed(0)} | ${b.rps.toFixed(0)} | ${(b.rps / a.rps).toFixed(2)} | ${c.rps.toFixed(0)} | ${(c.rps / a.rps).toFixed(2)} | ${a.p99} / ${b.p99} / ${c.p99} |`);
+const started: Started[] = [];
+async function startTracked(name: string, args: string[], env: Record<string, string>): Promise<Started> {
+  const one = await start(name, args, env);
+  started.push(one);
+  return one;
 }
-const median = (values: number[]) => [...values].sort((x, y) => x - y)[Math.floor(values.length / 2)] as number;
-const batch = await medianMs(`${uncached.url}/v1/member-checks/batch`, batchBody());
-const sizing = await medianMs(`${uncached.url}/v1/member-sizing`, SIZING);
-for (const started of [service, uncached, bare]) started.child.kill('SIGTERM');
-const engine = await engineMicros();
 
-lines.push(
-  '',
-  '| target | measured | goal |',
-  '| --- | ---: | ---: |',
-  `| typical check, service / bare route (median of rounds) | ${median(ratios).toFixed(2)} | >= 0.80 |`,
-  `| typical check, service with the answer cache off / bare route | ${median(uncachedRatios).toFixed(2)} | (every request computed) |`,
-  `| batch of 1,000 typical checks, 11 samples each, through the route (median of 11, cache off) | ${batch.median.toFixed(1)} ms (${(batch.bytes / 2 ** 20).toFixed(1)} MiB answer) | <= 150 ms |`,
-  `| sizing over 103 catalogue candidates through the route (median of 11, cache off) | ${sizing.median.toFixed(1)} ms | <= 15 ms |`,
-  `| engine alone (analyseMember + checkMember), typical check, median | ${engine.toFixed(1)} us | <= 20 us |`,
-  '',
-  `Node ${process.version}, ${process.platform} ${process.arch}.`,
-);
-console.log(lines.join('\n'));
+try {
+  const body = JSON.stringify(TYPICAL_CHECK);
+  const service = await startTracked('service', ['dist/main.js'], {});
+  const uncached = await startTracked('service, answer cache off', ['dist/main.js'], { ANSWER_CACHE_BYTES: '0' });
+  const answer = await post(`${uncached.url}/v1/member-checks`, body);
+  const cachedAnswer = await post(`${service.url}/v1/member-checks`, body);
+  if (answer.status !== 200 || cachedAnswer.text !== answer.text) throw new Error('the two services answer differently');
+  const answerFile = join(tmpdir(), `memberproof-bench-answer-${process.pid}.json`);
+  writeFileSync(answerFile, answer.text);
+  const bare = await startTracked('bare Fastify route', ['--import', 'tsx', 'bench/bare-route.ts'], { ANSWER_FILE: answerFile });
+  const bareAnswer = await post(`${bare.url}/v1/member-checks`, body);
+  if (bareAnswer.text !== answer.text) throw new Error('the bare route does not send the same bytes');
+
+  const lines = [
+    `Typical check, ${(answer.text.length / 1024).toFixed(1)} kB answer; autocannon 16 connections, ${SECONDS_PER_RUN} s a run, ${ROUNDS} rounds in turn.`,
+    '',
+    '| round | bare route (req/s) | service (req/s) | ratio | service, cache off (req/s) | ratio | p99 bare / service / cache off (ms) |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: |',
+  ];
+  const ratios: number[] = [];
+  const uncachedRatios: number[] = [];
+  for (let round = 1; round <= ROUNDS; round++) {
+    const a = await load(bare, body);
+    const b = await load(service, body);
+    const c = await load(uncached, body);
+    if (a.errors + b.errors + c.errors > 0) throw new Error(`errors under load: ${a.errors} ${b.errors} ${c.errors}`);
+    ratios.push(b.rps / a.rps);
+    uncachedRatios.push(c.rps / a.rps);
+    lines.push(`| ${round} | ${a.rps.toFixed(0)} | ${b.rps.toFixed(0)} | ${(b.rps / a.rps).toFixed(2)} | ${c.rps.toFixed(0)} | ${(c.rps / a.rps).toFixed(2)} | ${a.p99} / ${b.p99} / ${c.p99} |`);
+  }
+  const median = (values: number[]) => [...values].sort((x, y) => x - y)[Math.floor(values.length / 2)] as number;
+  const batch = await medianMs(`${uncached.url}/v1/member-checks/batch`, batchBody());
+  const sizing = await medianMs(`${uncached.url}/v1/member-sizing`, SIZING);
+  const growthLines = await growth(uncached.url);
+  const engine = await engineMicros();
+
+  lines.push(
+    '',
+    '| target | measured | goal |',
+    '| --- | ---: | ---: |',
+    `| typical check, service / bare route (median of rounds) | ${median(ratios).toFixed(2)} | >= 0.80 |`,
+    `| typical check, service with the answer cache off / bare route | ${median(uncachedRatios).toFixed(2)} | (every request computed) |`,
+    `| batch of 1,000 typical checks, 11 samples each, through the route (median of 11, cache off) | ${batch.median.toFixed(1)} ms (${(batch.bytes / 2 ** 20).toFixed(1)} MiB answer) | <= 150 ms |`,
+    `| sizing over 103 catalogue candidates through the route (median of 11, cache off) | ${sizing.median.toFixed(1)} ms | <= 15 ms |`,
+    `| engine alone (analyseMember + checkMember), typical check, median | ${engine.toFixed(1)} us | <= 20 us |`,
+    '',
+    'Growth end to end (service with the answer cache off; goal: 10 x the loads or spans costs at most 11 x):',
+    '',
+    ...growthLines,
+    '',
+    `Node ${process.version}, ${process.platform} ${process.arch}.`,
+  );
+  console.log(lines.join('\n'));
+} finally {
+  for (const one of started) one.child.kill('SIGTERM');
+}

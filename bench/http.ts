@@ -20,7 +20,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
-import { TYPICAL_CHECK } from './typical-checks.js';
+import { PLATFORM_JOIST, TYPICAL_CHECK } from './typical-checks.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const SECONDS_PER_RUN = Number(process.env.BENCH_SECONDS ?? 5);
@@ -97,17 +97,7 @@ function batchBody(): string {
   return JSON.stringify({ items });
 }
 
-const SIZING = JSON.stringify({
-  member: { length: 3, supports: [{ position: 0, type: 'pinned' }, { position: 3, type: 'roller' }] },
-  material: { grade: 'S355' },
-  loads: [
-    { type: 'distributed', from: 0, to: 3, qy: -6000 },
-    { type: 'point', position: 1.1, fy: -4000 },
-  ],
-  selfWeight: true,
-  output: { samples: 11 },
-  candidates: { families: ['IPE', 'HEA', 'HEB', 'SHS', 'RHS'] },
-});
+const SIZING = JSON.stringify({ ...PLATFORM_JOIST, candidates: { families: ['IPE', 'HEA', 'HEB', 'SHS', 'RHS'] } });
 
 /** The typical check with n point loads spread over the span. */
 function withPointLoads(n: number): string {

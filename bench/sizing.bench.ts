@@ -8,18 +8,7 @@ import { Bench } from 'tinybench';
 import { loadCatalogues } from '../src/api/load-catalogues.js';
 import { runMemberSizing } from '../src/api/member-sizing.js';
 import { memberSizingRequest } from '../src/api/schemas/member-sizing-exchange.js';
-
-/** A 3 m work-platform joist of a fictional maker. */
-const joist = {
-  member: { length: 3, supports: [{ position: 0, type: 'pinned' }, { position: 3, type: 'roller' }] },
-  material: { grade: 'S355' },
-  loads: [
-    { type: 'distributed', from: 0, to: 3, qy: -6000 },
-    { type: 'point', position: 1.1, fy: -4000 },
-  ],
-  selfWeight: true,
-  output: { samples: 11 },
-};
+import { PLATFORM_JOIST } from './typical-checks.js';
 
 export async function run(): Promise<string> {
   const catalogues = await loadCatalogues({});
@@ -31,7 +20,7 @@ export async function run(): Promise<string> {
   const bench = new Bench({ time: 1500, warmupTime: 300 });
   const counts = new Map<string, number>();
   for (const c of cases) {
-    const request = memberSizingRequest.parse({ ...joist, candidates: c.candidates });
+    const request = memberSizingRequest.parse({ ...PLATFORM_JOIST, candidates: c.candidates });
     counts.set(c.name, runMemberSizing(request, catalogues).candidates.length);
     bench.add(c.name, () => {
       runMemberSizing(request, catalogues);

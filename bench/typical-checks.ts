@@ -24,3 +24,15 @@ export const CATALOGUE_CHECK = {
   selfWeight: true,
   output: { samples: 11 },
 };
+
+/** A 3 m work-platform joist to be sized (no section): a uniform load, a point load and self-weight, 11 samples. */
+export const PLATFORM_JOIST = {
+  member: { length: 3, supports: [{ position: 0, type: 'pinned' }, { position: 3, type: 'roller' }] },
+  material: { grade: 'S355' },
+  loads: [
+    { type: 'distributed', from: 0, to: 3, qy: -6000 },
+    { type: 'point', position: 1.1, fy: -4000 },
+  ],
+  selfWeight: true,
+  output: { samples: 11 },
+};

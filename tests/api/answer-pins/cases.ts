@@ -8,7 +8,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { routeContracts } from '../../../src/app.js';
-import { CATALOGUE_CHECK, TYPICAL_CHECK } from '../../../bench/typical-checks.js';
+import { CATALOGUE_CHECK, PLATFORM_JOIST, TYPICAL_CHECK } from '../../../bench/typical-checks.js';
 
 export interface PinnedRequest {
   readonly name: string;
@@ -49,17 +49,7 @@ export const WHOLE_ANSWERS: readonly PinnedRequest[] = [
   {
     name: 'sizing-platform-joist',
     url: '/v1/member-sizing',
-    body: {
-      member: { length: 3, supports: [{ position: 0, type: 'pinned' }, { position: 3, type: 'roller' }] },
-      material: { grade: 'S355' },
-      loads: [
-        { type: 'distributed', from: 0, to: 3, qy: -6000 },
-        { type: 'point', position: 1.1, fy: -4000 },
-      ],
-      selfWeight: true,
-      output: { samples: 11 },
-      candidates: { family: 'IPE' },
-    },
+    body: { ...PLATFORM_JOIST, candidates: { family: 'IPE' } },
   },
   { name: 'section-properties-rhs', url: '/v1/section-properties', body: { section: { designation: 'RHS 120x60x4' }, output: { units: { length: 'mm' } } } },
   {

@@ -9,6 +9,9 @@
  * median), the time per request as loads and spans grow tenfold, and the engine alone for the
  * typical check (median).
  *
+ * BASELINE_DIR=<another checkout, built> adds that service to the same rounds and timings: the figures
+ * before and after a change, side by side in one run.
+ *
  * Targets (issue 9): typical check >= 0.8 x the bare route; batch <= 150 ms; sizing <= 15 ms;
  * engine <= 20 us. Ratios taken within a round share the machine's state, so they are what to compare.
  */
@@ -43,9 +46,9 @@ interface Started {
   readonly child: ChildProcess;
 }
 
-async function start(name: string, args: string[], env: Record<string, string>): Promise<Started> {
+async function start(name: string, args: string[], env: Record<string, string>, cwd = root): Promise<Started> {
   const port = await freePort();
-  const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'ignore', 'inherit'] });
+  const child = spawn(process.execPath, args, { cwd, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'ignore', 'inherit'] });
   const url = `http://127.0.0.1:${port}`;
   for (let attempt = 0; attempt < 200; attempt++) {
     const ready = await fetch(`${url}/v1/member-checks`, { method: 'OPTIONS' }).then(
@@ -147,8 +150,8 @@ async function engineMicros(): Promise<number> {
 }
 
 const started: Started[] = [];
-async function startTracked(name: string, args: string[], env: Record<string, string>): Promise<Started> {
-  const one = await start(name, args, env);
+async function startTracked(name: string, args: string[], env: Record<string, string>, cwd = root): Promise<Started> {
+  const one = await start(name, args, env, cwd);
   started.push(one);
   return one;
 }
@@ -165,38 +168,48 @@ try {
   const bare = await startTracked('bare Fastify route', ['--import', 'tsx', 'bench/bare-route.ts'], { ANSWER_FILE: answerFile });
   const bareAnswer = await post(`${bare.url}/v1/member-checks`, body);
   if (bareAnswer.text !== answer.text) throw new Error('the bare route does not send the same bytes');
+  // Another checkout's built service (BASELINE_DIR), measured in the same rounds: before and after side by side.
+  const baselineDir = process.env.BASELINE_DIR;
+  const baseline = baselineDir === undefined ? undefined : await startTracked(`baseline (${baselineDir})`, ['dist/main.js'], {}, baselineDir);
+  if (baseline && (await post(`${baseline.url}/v1/member-checks`, body)).text !== answer.text) throw new Error('the baseline answers differently');
 
+  const contenders = [service, uncached, ...(baseline ? [baseline] : [])];
   const lines = [
-    `Typical check, ${(answer.text.length / 1024).toFixed(1)} kB answer; autocannon 16 connections, ${SECONDS_PER_RUN} s a run, ${ROUNDS} rounds in turn.`,
+    `Typical check, ${(answer.text.length / 1024).toFixed(1)} kB answer; autocannon 16 connections, ${SECONDS_PER_RUN} s a run, ${ROUNDS} rounds, each loading the bare route and then every service in turn.`,
+    `Services: ${contenders.map((one) => one.name).join('; ')}.`,
     '',
-    '| round | bare route (req/s) | service (req/s) | ratio | service, cache off (req/s) | ratio | p99 bare / service / cache off (ms) |',
-    '| --- | ---: | ---: | ---: | ---: | ---: | ---: |',
+    `| round | bare route (req/s) | ${contenders.map((one) => `${one.name} (req/s) | ratio`).join(' | ')} | p99 (ms), same order |`,
+    `| --- | ---: | ${contenders.map(() => '---: | ---:').join(' | ')} | ---: |`,
   ];
-  const ratios: number[] = [];
-  const uncachedRatios: number[] = [];
+  const ratios = contenders.map((): number[] => []);
   for (let round = 1; round <= ROUNDS; round++) {
-    const a = await load(bare, body);
-    const b = await load(service, body);
-    const c = await load(uncached, body);
-    if (a.errors + b.errors + c.errors > 0) throw new Error(`errors under load: ${a.errors} ${b.errors} ${c.errors}`);
-    ratios.push(b.rps / a.rps);
-    uncachedRatios.push(c.rps / a.rps);
-    lines.push(`| ${round} | ${a.rps.toFixed(0)} | ${b.rps.toFixed(0)} | ${(b.rps / a.rps).toFixed(2)} | ${c.rps.toFixed(0)} | ${(c.rps / a.rps).toFixed(2)} | ${a.p99} / ${b.p99} / ${c.p99} |`);
+    const bareLoad = await load(bare, body);
+    const loads = [];
+    for (const one of contenders) loads.push(await load(one, body));
+    const errors = [bareLoad, ...loads].reduce((sum, one) => sum + one.errors, 0);
+    if (errors > 0) throw new Error(`${errors} errors under load`);
+    loads.forEach((one, i) => ratios[i]?.push(one.rps / bareLoad.rps));
+    const cells = loads.map((one) => `${one.rps.toFixed(0)} | ${(one.rps / bareLoad.rps).toFixed(2)}`).join(' | ');
+    lines.push(`| ${round} | ${bareLoad.rps.toFixed(0)} | ${cells} | ${[bareLoad, ...loads].map((one) => one.p99).join(' / ')} |`);
   }
   const median = (values: number[]) => [...values].sort((x, y) => x - y)[Math.floor(values.length / 2)] as number;
   const batch = await medianMs(`${uncached.url}/v1/member-checks/batch`, batchBody());
   const sizing = await medianMs(`${uncached.url}/v1/member-sizing`, SIZING);
+  const baselineBatch = baseline ? await medianMs(`${baseline.url}/v1/member-checks/batch`, batchBody()) : undefined;
+  const baselineSizing = baseline ? await medianMs(`${baseline.url}/v1/member-sizing`, SIZING) : undefined;
   const growthLines = await growth(uncached.url);
   const engine = await engineMicros();
+  const was = (value: { median: number } | undefined) => (value ? ` (baseline ${value.median.toFixed(1)} ms)` : '');
 
   lines.push(
     '',
     '| target | measured | goal |',
     '| --- | ---: | ---: |',
-    `| typical check, service / bare route (median of rounds) | ${median(ratios).toFixed(2)} | >= 0.80 |`,
-    `| typical check, service with the answer cache off / bare route | ${median(uncachedRatios).toFixed(2)} | (every request computed) |`,
-    `| batch of 1,000 typical checks, 11 samples each, through the route (median of 11, cache off) | ${batch.median.toFixed(1)} ms (${(batch.bytes / 2 ** 20).toFixed(1)} MiB answer) | <= 150 ms |`,
-    `| sizing over 103 catalogue candidates through the route (median of 11, cache off) | ${sizing.median.toFixed(1)} ms | <= 15 ms |`,
+    `| typical check, service / bare route (median of rounds) | ${median(ratios[0] ?? []).toFixed(2)} | >= 0.80 |`,
+    `| typical check, service with the answer cache off / bare route | ${median(ratios[1] ?? []).toFixed(2)} | (every request computed) |`,
+    ...(baseline ? [`| typical check, baseline / bare route | ${median(ratios[2] ?? []).toFixed(2)} | (before) |`] : []),
+    `| batch of 1,000 typical checks, 11 samples each, through the route (median of 11, cache off) | ${batch.median.toFixed(1)} ms${was(baselineBatch)} (${(batch.bytes / 2 ** 20).toFixed(1)} MiB answer) | <= 150 ms |`,
+    `| sizing over 103 catalogue candidates through the route (median of 11, cache off) | ${sizing.median.toFixed(1)} ms${was(baselineSizing)} | <= 15 ms |`,
     `| engine alone (analyseMember + checkMember), typical check, median | ${engine.toFixed(1)} us | <= 20 us |`,
     '',
     'Growth end to end (service with the answer cache off; goal: 10 x the loads or spans costs at most 11 x):',

@@ -66,6 +66,13 @@ function rejectCouplesAtHinges(model: MemberModel, nodes: MemberNodes): void {
   });
 }
 
+/** The numbers of a typed array in a plain array (Array.from of a typed array is slow in Node 20). */
+function plainNumbers(values: Float64Array): number[] {
+  const plain: number[] = [];
+  for (let i = 0; i < values.length; i++) plain.push(values[i] as number);
+  return plain;
+}
+
 export function analyseMember(model: MemberModel): MemberAnalysis {
   validateMemberModel(model);
   const nodes = buildMemberNodes(model);
@@ -93,7 +100,7 @@ export function analyseMember(model: MemberModel): MemberAnalysis {
   );
   return {
     length: model.length,
-    nodes: Array.from(nodes.positions),
+    nodes: plainNumbers(nodes.positions),
     pieces,
     reactions,
     extremes: fieldExtremes(pieces),

@@ -4,6 +4,7 @@
  * half-bandwidth b: linear in the number of nodes of a member.
  */
 
+import { packedZeros, zeroFilledDoubles, type DoubleArray } from './zero-filled.js';
 import { PIVOT_TOLERANCE } from './tolerances.js';
 
 export interface SymmetricBandMatrix {
@@ -11,11 +12,11 @@ export interface SymmetricBandMatrix {
   /** Largest |i - j| of a non-zero entry. */
   readonly halfBandwidth: number;
   /** The lower band by rows: entry (i, j), j <= i <= j + halfBandwidth, at i * (halfBandwidth + 1) + i - j. */
-  readonly entries: Float64Array;
+  readonly entries: DoubleArray;
 }
 
 export function createSymmetricBandMatrix(size: number, halfBandwidth: number): SymmetricBandMatrix {
-  return { size, halfBandwidth, entries: new Float64Array(size * (halfBandwidth + 1)) };
+  return { size, halfBandwidth, entries: zeroFilledDoubles(size * (halfBandwidth + 1)) };
 }
 
 function bandIndex(matrix: SymmetricBandMatrix, row: number, col: number): number {
@@ -55,7 +56,7 @@ export interface BandFactors {
   readonly size: number;
   readonly halfBandwidth: number;
   /** Unit lower factor L below the diagonal and D on it, in the band layout. */
-  readonly entries: Float64Array;
+  readonly entries: DoubleArray;
 }
 
 /** The factorization stopped at a vanishing pivot: the leading block up to it is singular. */
@@ -76,8 +77,8 @@ export function factorSymmetricBand(
 ): BandFactors | SingularBand {
   const { size: n, halfBandwidth: b } = matrix;
   const width = b + 1;
-  const a = Float64Array.from(matrix.entries);
-  const column = new Float64Array(width);
+  const a = matrix.entries.slice();
+  const column = packedZeros(width);
   for (let j = 0; j < n; j++) {
     const pivot = a[j * width] as number;
     const original = matrix.entries[j * width] as number;
@@ -101,7 +102,7 @@ export function factorSymmetricBand(
 }
 
 /** Back substitution L^T z = e_k over the columns already factored. */
-function leadingNullVector(a: Float64Array, n: number, b: number, k: number): Float64Array {
+function leadingNullVector(a: ArrayLike<number>, n: number, b: number, k: number): Float64Array {
   const width = b + 1;
   const z = new Float64Array(n);
   z[k] = 1;

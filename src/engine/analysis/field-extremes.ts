@@ -6,32 +6,40 @@
  */
 
 import { derivative, evaluatePolynomial, realRootsIn } from './polynomial.js';
-import { DIAGRAM_FIELDS, type DiagramField, type FieldExtremes, type MemberPiece, type Polynomial } from './result.js';
+import { DIAGRAM_FIELDS, type DiagramField, type Extreme, type FieldExtremes, type MemberPiece, type Polynomial } from './result.js';
 import { roundedToZero, ZERO_TOLERANCE } from './tolerances.js';
 
-/** Candidate values and positions of one field, in ascending position. */
+/**
+ * Candidate values and positions of one field, in ascending position. Plain arrays kept from call to
+ * call: a Float64Array of this size is allocated outside the heap, which cost more than the search.
+ */
 class Candidates {
-  values = new Float64Array(64);
-  positions = new Float64Array(64);
+  readonly values: number[] = [];
+  readonly positions: number[] = [];
   count = 0;
 
   push(value: number, position: number): void {
     if (this.count === this.values.length) {
-      const values = new Float64Array(this.count * 2);
-      const positions = new Float64Array(this.count * 2);
-      values.set(this.values);
-      positions.set(this.positions);
-      this.values = values;
-      this.positions = positions;
+      this.values.push(value);
+      this.positions.push(position);
+    } else {
+      this.values[this.count] = value;
+      this.positions[this.count] = position;
     }
-    this.values[this.count] = value;
-    this.positions[this.count] = position;
     this.count++;
   }
 }
 
+/** One field is gathered and reduced at a time, synchronously, so every call shares these arrays. */
+const fieldCandidates = new Candidates();
+
+/** Candidate i, its value rounded to 0 at or below ZERO_TOLERANCE of the scale. */
+function extremeAt(candidates: Candidates, i: number, scale: number): Extreme {
+  return { value: roundedToZero(candidates.values[i] as number, scale), position: candidates.positions[i] as number };
+}
+
 function extremesOf(candidates: Candidates): FieldExtremes {
-  const { values, positions, count } = candidates;
+  const { values, count } = candidates;
   let largest = Number.NEGATIVE_INFINITY;
   let smallest = Number.POSITIVE_INFINITY;
   for (let i = 0; i < count; i++) {
@@ -48,11 +56,7 @@ function extremesOf(candidates: Candidates): FieldExtremes {
     if (max < 0 && v >= largest - tie) max = i;
     if (min < 0 && v <= smallest + tie) min = i;
   }
-  const extreme = (i: number) => ({
-    value: roundedToZero(values[i] as number, scale),
-    position: positions[i] as number,
-  });
-  return { max: extreme(max), min: extreme(min) };
+  return { max: extremeAt(candidates, max, scale), min: extremeAt(candidates, min, scale) };
 }
 
 /**
@@ -72,7 +76,7 @@ function pushInteriorStationary(candidates: Candidates, p: Polynomial, start: nu
 
 export function fieldExtremes(pieces: readonly MemberPiece[]): Record<DiagramField, FieldExtremes> {
   const result = {} as Record<DiagramField, FieldExtremes>;
-  const candidates = new Candidates();
+  const candidates = fieldCandidates;
   for (const field of DIAGRAM_FIELDS) {
     candidates.count = 0;
     for (const piece of pieces) {

@@ -49,7 +49,9 @@ class PositionList {
   /** Item indices by ascending position, then rank. */
   sorted(): Int32Array {
     const { position, rank } = this;
-    return Int32Array.from({ length: this.count }, (_, i) => i).sort(
+    const order = new Int32Array(this.count);
+    for (let i = 0; i < this.count; i++) order[i] = i;
+    return order.sort(
       (p, q) => (position[p] as number) - (position[q] as number) || (rank[p] as number) - (rank[q] as number),
     );
   }
@@ -84,6 +86,14 @@ function cluster(list: PositionList, order: Int32Array, tolerance: number): { po
   return { positions, clusterOf };
 }
 
+/** Node s, else node s + 1, if it lies within the tolerance of x; -1 if neither does. */
+function structuralNodeNear(positions: readonly number[], s: number, x: number, tolerance: number): number {
+  for (let k = s; k <= s + 1; k++) {
+    if (k < positions.length && Math.abs((positions[k] as number) - x) <= tolerance) return k;
+  }
+  return -1;
+}
+
 export function buildMemberNodes(model: MemberModel): MemberNodes {
   const { length, supports, hinges, loads } = model;
 
@@ -109,10 +119,8 @@ export function buildMemberNodes(model: MemberModel): MemberNodes {
   for (const item of loadOrder) {
     const x = loadItems.position[item] as number;
     while (s + 1 < structuralPositions.length && (structuralPositions[s + 1] as number) <= x) s++;
-    const nearest = [s, s + 1].find(
-      (k) => k < structuralPositions.length && Math.abs((structuralPositions[k] as number) - x) <= loadTolerance,
-    );
-    if (nearest === undefined) freeItems.push(item);
+    const nearest = structuralNodeNear(structuralPositions, s, x, loadTolerance);
+    if (nearest < 0) freeItems.push(item);
     else onStructural[item] = nearest;
   }
   const loadClusters = cluster(loadItems, Int32Array.from(freeItems), loadTolerance);

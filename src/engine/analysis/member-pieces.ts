@@ -8,7 +8,7 @@ import type { MemberSolutions } from './support-reactions.js';
 const ZERO: Polynomial = Object.freeze([0]);
 
 /** Coefficients [offset, offset + terms) without trailing zeros (at least one kept) and without -0. */
-function polynomialAt(coefficients: Float64Array, piece: number, terms: number): Polynomial {
+function polynomialAt(coefficients: ArrayLike<number>, piece: number, terms: number): Polynomial {
   const offset = piece * terms;
   let degree = terms - 1;
   while (degree >= 0 && coefficients[offset + degree] === 0) degree--;

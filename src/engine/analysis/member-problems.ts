@@ -9,7 +9,7 @@
  * keeps its stiffness.
  */
 
-import type { Direction, MemberModel, Restraint } from '../member/model.js';
+import type { Direction, LinearIntensity, MemberModel, Restraint } from '../member/model.js';
 import type { MemberNodes } from './member-nodes.js';
 import type { BarProblem } from './solve-bar.js';
 import type { BendingProblem } from './solve-bending.js';
@@ -46,27 +46,40 @@ function bendingProblem(rigidity: number, nodeCount: number): BendingProblem {
   };
 }
 
+/** The intensity at a node of [first, last]: the given values at the ends, linear in x between. */
+function intensityAt(positions: Float64Array, node: number, first: number, last: number, intensity: LinearIntensity): number {
+  const atFrom = intensity[0];
+  const atTo = intensity[1];
+  if (node === first) return atFrom;
+  if (node === last) return atTo;
+  const from = positions[first] as number;
+  const span = (positions[last] as number) - from;
+  return atFrom + ((atTo - atFrom) * ((positions[node] as number) - from)) / span;
+}
+
 /** Adds a linear intensity over nodes [first, last] to the per-piece arrays. */
 function spreadLinear(
   positions: Float64Array,
   first: number,
   last: number,
-  [atFrom, atTo]: readonly [number, number],
+  intensity: LinearIntensity,
   loadAtStart: Float64Array,
   loadAtEnd: Float64Array,
 ): void {
-  if (atFrom === 0 && atTo === 0) return;
-  const from = positions[first] as number;
-  const span = (positions[last] as number) - from;
-  const intensity = (node: number): number => {
-    if (node === first) return atFrom;
-    if (node === last) return atTo;
-    return atFrom + ((atTo - atFrom) * ((positions[node] as number) - from)) / span;
-  };
+  if (intensity[0] === 0 && intensity[1] === 0) return;
   for (let j = first; j < last; j++) {
-    loadAtStart[j] = (loadAtStart[j] as number) + intensity(j);
-    loadAtEnd[j] = (loadAtEnd[j] as number) + intensity(j + 1);
+    loadAtStart[j] = (loadAtStart[j] as number) + intensityAt(positions, j, first, last, intensity);
+    loadAtEnd[j] = (loadAtEnd[j] as number) + intensityAt(positions, j + 1, first, last, intensity);
   }
+}
+
+/** Integral of a linear intensity over a range of the given length. */
+function resultantOver(intensity: LinearIntensity, length: number): number {
+  return ((intensity[0] + intensity[1]) / 2) * length;
+}
+
+function addAt(array: Float64Array, node: number, value: number): void {
+  array[node] = (array[node] as number) + value;
 }
 
 function restrain(restraint: Restraint, node: number, rigid: Uint8Array, spring: Float64Array): void {
@@ -80,27 +93,24 @@ export function memberProblems(model: MemberModel, nodes: MemberNodes): MemberPr
   const torsion = barProblem(model.stiffness.torsional, n);
   const vertical = bendingProblem(model.stiffness.bendingZ, n);
   const horizontal = bendingProblem(model.stiffness.bendingY, n);
-  const add = (array: Float64Array, node: number, value: number): void => {
-    array[node] = (array[node] as number) + value;
-  };
 
   model.loads.forEach((load, i) => {
     const first = nodes.loadStartNode[i] as number;
     const last = nodes.loadEndNode[i] as number;
     if (load.kind === 'point') {
-      add(axial.pointLoad, first, load.fx);
-      add(torsion.pointLoad, first, load.mx);
-      add(vertical.pointForce, first, load.fy);
-      add(vertical.pointCouple, first, load.mz);
-      add(horizontal.pointForce, first, load.fz);
-      add(horizontal.pointCouple, first, -load.my);
+      addAt(axial.pointLoad, first, load.fx);
+      addAt(torsion.pointLoad, first, load.mx);
+      addAt(vertical.pointForce, first, load.fy);
+      addAt(vertical.pointCouple, first, load.mz);
+      addAt(horizontal.pointForce, first, load.fz);
+      addAt(horizontal.pointCouple, first, -load.my);
     } else if (first === last) {
       // A range shorter than the node tolerance: its resultant at the one node it collapses to.
-      const resultant = ([a, b]: readonly [number, number]): number => ((a + b) / 2) * (load.to - load.from);
-      add(axial.pointLoad, first, resultant(load.qx));
-      add(torsion.pointLoad, first, resultant(load.mx));
-      add(vertical.pointForce, first, resultant(load.qy));
-      add(horizontal.pointForce, first, resultant(load.qz));
+      const length = load.to - load.from;
+      addAt(axial.pointLoad, first, resultantOver(load.qx, length));
+      addAt(torsion.pointLoad, first, resultantOver(load.mx, length));
+      addAt(vertical.pointForce, first, resultantOver(load.qy, length));
+      addAt(horizontal.pointForce, first, resultantOver(load.qz, length));
     } else {
       const x = nodes.positions;
       spreadLinear(x, first, last, load.qx, axial.loadAtStart, axial.loadAtEnd);
@@ -118,9 +128,10 @@ export function memberProblems(model: MemberModel, nodes: MemberNodes): MemberPr
     uz: [horizontal.translationRigid, horizontal.translationSpring],
     ry: [horizontal.rotationRigid, horizontal.rotationSpring],
   };
+  const directions = Object.keys(targets) as Direction[];
   model.supports.forEach((support, i) => {
     const node = nodes.supportNode[i] as number;
-    for (const direction of Object.keys(targets) as Direction[]) {
+    for (const direction of directions) {
       const [rigid, spring] = targets[direction];
       restrain(support.restraints[direction], node, rigid, spring);
     }

@@ -69,11 +69,15 @@ export function realRootsIn(p: Polynomial, a: number, b: number): number[] {
     return root > a && root < b ? [root] : [];
   }
   if (q.length === 3) return quadraticRootsIn(q[0] as number, q[1] as number, q[2] as number, a, b);
-  const cuts = [a, ...realRootsIn(derivative(q), a, b), b];
+  // The parts run from a to the first root of q', between consecutive roots, and from the last to b.
+  const cuts = realRootsIn(derivative(q), a, b);
   const roots: number[] = [];
-  for (let i = 0; i + 1 < cuts.length; i++) {
-    const root = bracketedRoot(q, cuts[i] as number, cuts[i + 1] as number);
+  let from = a;
+  for (let i = 0; i <= cuts.length; i++) {
+    const to = i < cuts.length ? (cuts[i] as number) : b;
+    const root = bracketedRoot(q, from, to);
     if (root !== undefined && root > a && root < b) pushDistinct(roots, root, a, b);
+    from = to;
   }
   return roots;
 }
@@ -87,9 +91,21 @@ function quadraticRootsIn(c0: number, c1: number, c2: number, a: number, b: numb
   const discriminant = c1 * c1 - 4 * c2 * c0;
   if (discriminant < 0) return [];
   const q = -0.5 * (c1 + (c1 < 0 ? -1 : 1) * Math.sqrt(discriminant));
-  const candidates = q === 0 ? [0] : [q / c2, c0 / q].sort((x, y) => x - y);
   const roots: number[] = [];
-  for (const root of candidates) if (root > a && root < b) pushDistinct(roots, root, a, b);
+  if (q === 0) {
+    if (0 > a && 0 < b) roots.push(0);
+    return roots;
+  }
+  // The two candidates in ascending order, swapped exactly when a sort by x - y would swap them.
+  let lower = q / c2;
+  let upper = c0 / q;
+  if (upper - lower < 0) {
+    const first = upper;
+    upper = lower;
+    lower = first;
+  }
+  if (lower > a && lower < b) pushDistinct(roots, lower, a, b);
+  if (upper > a && upper < b) pushDistinct(roots, upper, a, b);
   return roots;
 }
 

@@ -17,6 +17,7 @@ import {
 } from './banded-solver.js';
 import { anyNonZero, largestMotionNode, structuralNodeIndices, type LineMechanism } from './line-problem.js';
 import type { MemberNodes } from './member-nodes.js';
+import { zeroFilledDoubles, type DoubleArray } from './zero-filled.js';
 
 export interface BarProblem {
   /** EA (N) or GJ (N*m^2). */
@@ -34,8 +35,8 @@ export interface BarProblem {
 export interface BarSolution {
   readonly kind: 'solved';
   /** Per piece, ascending coefficients in the local coordinate s: 3 for the force, 4 for the motion. */
-  readonly force: Float64Array;
-  readonly displacement: Float64Array;
+  readonly force: DoubleArray;
+  readonly displacement: DoubleArray;
   /** Per node: the load all the restraints there apply to the bar (zero where there are none). */
   readonly reaction: Float64Array;
   /** Per node: the displacement (or twist) at structural nodes. */
@@ -49,8 +50,8 @@ function emptyBarSolution(nodeCount: number): BarSolution {
   const pieces = nodeCount - 1;
   return {
     kind: 'solved',
-    force: new Float64Array(pieces * FORCE_TERMS),
-    displacement: new Float64Array(pieces * DISPLACEMENT_TERMS),
+    force: zeroFilledDoubles(pieces * FORCE_TERMS),
+    displacement: zeroFilledDoubles(pieces * DISPLACEMENT_TERMS),
     reaction: new Float64Array(nodeCount),
     nodalDisplacement: new Float64Array(nodeCount),
   };
@@ -107,18 +108,21 @@ function marchBar(
   end.displacement = displacement;
 }
 
+/** No support holds the bar at the node, rigidly or by a spring. */
+function isFree(problem: BarProblem, node: number): boolean {
+  return problem.rigid[node] === 0 && problem.spring[node] === 0;
+}
+
 export function solveBar(nodes: MemberNodes, problem: BarProblem): BarSolution | LineMechanism {
   const solution = emptyBarSolution(nodes.count);
   if (!anyNonZero(problem.pointLoad, problem.loadAtStart, problem.loadAtEnd)) return solution;
   const x = nodes.positions;
   const structural = structuralNodeIndices(nodes);
   const m = structural.length;
-  const dofOfNode = Int32Array.from({ length: m }, (_, k) => k);
   const stiffness = createSymmetricBandMatrix(m, 1);
   const rhs = new Float64Array(m);
   const fixedEndIntegral = new Float64Array(m - 1);
   const loadForceEnd = new Float64Array(m - 1);
-  const isFree = (node: number): boolean => problem.rigid[node] === 0 && problem.spring[node] === 0;
   const end: BarMarchEnd = { force: 0, displacement: 0 };
   const rigidity = problem.rigidity;
 
@@ -152,6 +156,7 @@ export function solveBar(nodes: MemberNodes, problem: BarProblem): BarSolution |
 
   const factors = factorSymmetricBand(stiffness);
   if (factors.kind === 'singular') {
+    const dofOfNode = Int32Array.from({ length: m }, (_, k) => k);
     const k = largestMotionNode(factors.nullVector, dofOfNode);
     return { kind: 'mechanism', motion: 'translation', node: structural[Math.max(0, k)] as number };
   }
@@ -165,8 +170,8 @@ export function solveBar(nodes: MemberNodes, problem: BarProblem): BarSolution |
     const h = (x[b] as number) - (x[a] as number);
     // At a free member end statics fixes the force: N(0+) = -P_0 and N(length-) = P_length.
     let startForce = (rigidity * ((u[e + 1] as number) - (u[e] as number)) - (fixedEndIntegral[e] as number)) / h;
-    if (e === 0 && isFree(a)) startForce = -(problem.pointLoad[a] as number);
-    else if (e === m - 2 && isFree(b)) startForce = (problem.pointLoad[b] as number) - (loadForceEnd[e] as number);
+    if (e === 0 && isFree(problem, a)) startForce = -(problem.pointLoad[a] as number);
+    else if (e === m - 2 && isFree(problem, b)) startForce = (problem.pointLoad[b] as number) - (loadForceEnd[e] as number);
     forceRight[e] = startForce;
     marchBar(nodes, problem, a, b, startForce, u[e] as number, rigidity, end, solution);
     forceLeft[e + 1] = end.force;

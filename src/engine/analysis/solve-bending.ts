@@ -22,6 +22,7 @@ import {
 } from './banded-solver.js';
 import { anyNonZero, largestMotionNode, structuralNodeIndices, type LineMechanism } from './line-problem.js';
 import type { MemberNodes } from './member-nodes.js';
+import { zeroFilledDoubles, type DoubleArray } from './zero-filled.js';
 
 export interface BendingProblem {
   /** EI, N*m^2. */
@@ -42,10 +43,10 @@ export interface BendingProblem {
 export interface BendingSolution {
   readonly kind: 'solved';
   /** Per piece, ascending coefficients in the local coordinate s: 3, 4, 5 and 6 of them. */
-  readonly shear: Float64Array;
-  readonly moment: Float64Array;
-  readonly slope: Float64Array;
-  readonly deflection: Float64Array;
+  readonly shear: DoubleArray;
+  readonly moment: DoubleArray;
+  readonly slope: DoubleArray;
+  readonly deflection: DoubleArray;
   /** Per node: the force and couple all the restraints there apply (zero where there are none). */
   readonly reactionForce: Float64Array;
   readonly reactionCouple: Float64Array;
@@ -63,10 +64,10 @@ function emptyBendingSolution(nodeCount: number): BendingSolution {
   const pieces = nodeCount - 1;
   return {
     kind: 'solved',
-    shear: new Float64Array(pieces * SHEAR_TERMS),
-    moment: new Float64Array(pieces * MOMENT_TERMS),
-    slope: new Float64Array(pieces * SLOPE_TERMS),
-    deflection: new Float64Array(pieces * DEFLECTION_TERMS),
+    shear: zeroFilledDoubles(pieces * SHEAR_TERMS),
+    moment: zeroFilledDoubles(pieces * MOMENT_TERMS),
+    slope: zeroFilledDoubles(pieces * SLOPE_TERMS),
+    deflection: zeroFilledDoubles(pieces * DEFLECTION_TERMS),
     reactionForce: new Float64Array(nodeCount),
     reactionCouple: new Float64Array(nodeCount),
     translation: new Float64Array(nodeCount),

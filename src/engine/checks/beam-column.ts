@@ -16,7 +16,7 @@
 
 import type { CheckContext, CheckFindings } from './check-context.js';
 import type { FailureCheck, NotApplicableCheck } from './check-outcome.js';
-import { columnAxes, eulerLoad, bucklesAboutMinorAxis, type ColumnAxis } from './column-buckling.js';
+import { eulerLoad, bucklesAboutMinorAxis, type ColumnAxis } from './column-buckling.js';
 import { largestMagnitudeOn, type Peak } from './critical-positions.js';
 import { failureCheck, safetyRatio } from './failure-check.js';
 
@@ -162,7 +162,7 @@ export function beamColumnChecks(context: CheckContext, compression: Peak): Chec
   const { buckling = {} } = context.input;
   const checks: FailureCheck[] = [];
   const notApplicable: NotApplicableCheck[] = [];
-  const axes = columnAxes(context);
+  const axes = context.columnAxes;
   const force = compression.value * context.input.section.area;
   const noCompression = axes.some((axis) => safetyRatio(eulerLoad(context, axis), force) === null);
   if (buckling.amplification === false) {

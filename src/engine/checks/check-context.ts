@@ -1,6 +1,10 @@
-/** What every check reads: the input, the scanned member, its stress peaks, the resolved criteria and the strengths. */
+/**
+ * What every check reads: the input, the scanned member, its stress peaks, the resolved criteria, the
+ * strengths and the column axes.
+ */
 
 import type { MemberCheckInput } from './check-input.js';
+import { columnAxesOf, type ColumnAxis } from './column-buckling.js';
 import type { FailureCheck, NotApplicableCheck, StressSummary } from './check-outcome.js';
 import { resolveCriteria, type ResolvedCriteria } from './criteria.js';
 import { scanMember, type MemberScan } from './critical-positions.js';
@@ -13,6 +17,8 @@ export interface CheckContext {
   readonly peaks: StressSummary;
   readonly criteria: ResolvedCriteria;
   readonly strengths: MaterialStrengths;
+  /** The axes buckling is checked about, each with its K L. */
+  readonly columnAxes: readonly ColumnAxis[];
 }
 
 /** The checks a module made and the modes it found not to apply. */
@@ -21,7 +27,7 @@ export interface CheckFindings {
   readonly notApplicable: readonly NotApplicableCheck[];
 }
 
-/** Resolves the criteria, finds the critical positions and the stress peaks. */
+/** Resolves the criteria, finds the critical positions and the stress peaks, and the column axes. */
 export function buildCheckContext(input: MemberCheckInput): CheckContext {
   const criteria = resolveCriteria(input.criteria, input.material);
   const scan = scanMember(input.analysis, input.section);
@@ -31,5 +37,6 @@ export function buildCheckContext(input: MemberCheckInput): CheckContext {
     peaks: stressPeaks(input, scan),
     criteria,
     strengths: materialStrengths(input.material, criteria.shearYieldRatio),
+    columnAxes: columnAxesOf(input),
   };
 }

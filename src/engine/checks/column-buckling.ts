@@ -7,6 +7,7 @@
 import { EngineError } from '../engine-error.js';
 import type { SectionProperties } from '../sections/section-properties.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
+import type { MemberCheckInput } from './check-input.js';
 import type { BucklingAxis, BucklingAxisResult, BucklingRegime, BucklingSummary } from './check-outcome.js';
 import type { Peak } from './critical-positions.js';
 import { resolveEffectiveLengthFactor, type EffectiveLengthFactor } from './effective-length.js';
@@ -52,36 +53,26 @@ export interface ColumnAxis {
   readonly effectiveLength: number;
 }
 
-/** The buckling, beam-column and notice modules all ask for the axes of one check: work them out once. */
-const axesOfContext = new WeakMap<CheckContext, readonly ColumnAxis[]>();
-
 /**
  * The axes to check, each with its K L. The unbraced length defaults to the member length; the minor
  * axis takes the larger of the two plane factors.
  */
-export function columnAxes(context: CheckContext): ColumnAxis[] {
-  const known = axesOfContext.get(context);
-  if (known !== undefined) return [...known];
-  const axes = axesOf(context);
-  axesOfContext.set(context, axes);
-  return [...axes];
-}
-
-function axesOf(context: CheckContext): ColumnAxis[] {
-  const { section, model, buckling = {} } = context.input;
+export function columnAxesOf(input: MemberCheckInput): ColumnAxis[] {
+  const { section, model, buckling = {} } = input;
   const unbracedLength = buckling.unbracedLength ?? model.length;
   const aboutZ = resolveEffectiveLengthFactor(buckling, model, 'z');
   const aboutY = resolveEffectiveLengthFactor(buckling, model, 'y');
-  const axis = (name: BucklingAxis, radiusOfGyration: number, factor: EffectiveLengthFactor): ColumnAxis => ({
-    axis: name,
-    radiusOfGyration,
-    effectiveLengthFactor: factor,
-    effectiveLength: factor.factor * unbracedLength,
-  });
   if (bucklesAboutMinorAxis(section)) {
-    return [axis('minor', section.radiusOfGyrationMinor, aboutZ.factor >= aboutY.factor ? aboutZ : aboutY)];
+    return [columnAxis('minor', section.radiusOfGyrationMinor, aboutZ.factor >= aboutY.factor ? aboutZ : aboutY, unbracedLength)];
   }
-  return [axis('z', section.radiusOfGyrationZ, aboutZ), axis('y', section.radiusOfGyrationY, aboutY)];
+  return [
+    columnAxis('z', section.radiusOfGyrationZ, aboutZ, unbracedLength),
+    columnAxis('y', section.radiusOfGyrationY, aboutY, unbracedLength),
+  ];
+}
+
+function columnAxis(axis: BucklingAxis, radiusOfGyration: number, factor: EffectiveLengthFactor, unbracedLength: number): ColumnAxis {
+  return { axis, radiusOfGyration, effectiveLengthFactor: factor, effectiveLength: factor.factor * unbracedLength };
 }
 
 /** Euler load pi^2 E A r^2 / (K L)^2 about one axis, N (Shigley 10th ed., eq. 4-43, from memory). */
@@ -97,7 +88,7 @@ export function columnBuckling(
   const { section, material } = context.input;
   const yieldStrength = context.strengths.compression.value;
   const compressiveForce = compression.value * section.area;
-  const columns = columnAxes(context).map((axis) => {
+  const columns = context.columnAxes.map((axis) => {
     const slendernessRatio = axis.effectiveLength / axis.radiusOfGyration;
     const { regime, stress } = columnCriticalStress(material.elasticModulus, yieldStrength, slendernessRatio);
     return { axis, slendernessRatio, regime, stress, criticalLoad: stress * section.area };

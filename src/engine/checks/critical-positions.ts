@@ -11,6 +11,7 @@
 import { derivative, evaluatePolynomial, realRootsIn } from '../analysis/polynomial.js';
 import type { DiagramField, MemberAnalysis, MemberPiece, Polynomial } from '../analysis/result.js';
 import type { SectionProperties } from '../sections/section-properties.js';
+import { PolynomialBuffer } from './polynomial-buffer.js';
 import { scaledPolynomial, squarePolynomial, sumOfPolynomials } from './polynomial-products.js';
 import { sectionForcesOnPiece, type SectionForces } from './section-forces.js';
 import { sectionStressFactors, type SectionStressFactors } from './section-stress-factors.js';
@@ -37,40 +38,43 @@ export interface Peak {
 }
 
 /** A polynomial of degree two or more with a non-zero coefficient beyond the linear one: its derivative can have a root. */
-function derivativeCanVanish(p: Polynomial): boolean {
-  for (let i = 2; i < p.length; i++) if ((p[i] as number) !== 0) return true;
+function derivativeCanVanish(p: Polynomial, terms: number = p.length): boolean {
+  for (let i = 2; i < terms; i++) if ((p[i] as number) !== 0) return true;
   return false;
 }
 
 /**
- * Polynomials kept by their last coefficient, so that an equal one is found without comparing it
- * with every other. Equal means the same coefficients from index `from` on, signed zeros told apart:
- * from 1, the same derivative and so the same roots.
+ * Polynomials with distinct derivatives, kept by their last coefficient so that an equal one is found
+ * without comparing it with every other. Equal means the same coefficients from index 1 on, signed
+ * zeros told apart: the same derivative and so the same roots. A polynomial is given by its first
+ * `terms` coefficients, so that one held in a buffer is looked up without a copy.
  */
-class PolynomialTable<T> {
-  private readonly buckets = new Map<number, { readonly key: Polynomial; readonly value: T }[]>();
+class DerivativeSet {
+  private readonly buckets = new Map<number, Polynomial[]>();
 
-  constructor(private readonly from: 0 | 1) {}
-
-  get(p: Polynomial): T | undefined {
-    const bucket = this.buckets.get(p[p.length - 1] as number);
-    if (bucket === undefined) return undefined;
-    for (const entry of bucket) if (this.equal(entry.key, p)) return entry.value;
-    return undefined;
+  /**
+   * Keeps the polynomial unless one with its derivative is kept already, and returns what it kept
+   * (a copy of the coefficients with `copy`, for a buffer that is reused), or undefined.
+   */
+  addIfNew(p: Polynomial, terms: number, copy: boolean): Polynomial | undefined {
+    const last = p[terms - 1] as number;
+    let bucket = this.buckets.get(last);
+    if (bucket === undefined) {
+      bucket = [];
+      this.buckets.set(last, bucket);
+    } else {
+      for (const key of bucket) if (sameDerivative(key, p, terms)) return undefined;
+    }
+    const key = copy ? p.slice(0, terms) : p;
+    bucket.push(key);
+    return key;
   }
+}
 
-  set(p: Polynomial, value: T): void {
-    const last = p[p.length - 1] as number;
-    const bucket = this.buckets.get(last);
-    if (bucket === undefined) this.buckets.set(last, [{ key: p, value }]);
-    else bucket.push({ key: p, value });
-  }
-
-  private equal(p: Polynomial, q: Polynomial): boolean {
-    if (p.length !== q.length) return false;
-    for (let i = this.from; i < p.length; i++) if (!Object.is(p[i], q[i])) return false;
-    return true;
-  }
+function sameDerivative(key: Polynomial, p: Polynomial, terms: number): boolean {
+  if (key.length !== terms) return false;
+  for (let i = 1; i < terms; i++) if (!Object.is(key[i], p[i])) return false;
+  return true;
 }
 
 function ascending(a: number, b: number): number {
@@ -78,28 +82,57 @@ function ascending(a: number, b: number): number {
 }
 
 /**
- * The piece ends and the interior roots of the derivatives of the given polynomials, ascending.
+ * The piece ends and the interior roots of the derivatives of the polynomials offered, ascending.
  * A derivative that is constant has no root, and one met before adds nothing, so neither is solved.
  */
-export function criticalCoordinates(piece: MemberPiece, polynomials: readonly Polynomial[]): number[] {
-  const length = piece.end - piece.start;
-  const coordinates = [0, length];
-  const solved = new PolynomialTable<true>(1);
-  for (const p of polynomials) {
-    if (!derivativeCanVanish(p) || solved.get(p) !== undefined) continue;
-    solved.set(p, true);
-    for (const root of realRootsIn(derivative(p), 0, length)) coordinates.push(root);
+class CoordinateSearch {
+  private readonly coordinates: number[];
+  private readonly solved = new DerivativeSet();
+
+  constructor(private readonly length: number) {
+    this.coordinates = [0, length];
   }
-  coordinates.sort(ascending);
-  const distinct = [coordinates[0] as number];
-  for (let i = 1; i < coordinates.length; i++) {
-    const s = coordinates[i] as number;
-    if (s - (coordinates[i - 1] as number) > 1e-12 * length) distinct.push(s);
+
+  offer(p: Polynomial): void {
+    this.solveIfNew(p, p.length, false);
   }
-  return distinct;
+
+  /** Offers what the buffer holds now; a copy is kept if it is solved, since the buffer is reused. */
+  offerBuffer(buffer: PolynomialBuffer): void {
+    this.solveIfNew(buffer.coefficients, buffer.terms, true);
+  }
+
+  private solveIfNew(p: Polynomial, terms: number, copy: boolean): void {
+    if (!derivativeCanVanish(p, terms)) return;
+    const solved = this.solved.addIfNew(p, terms, copy);
+    if (solved === undefined) return;
+    for (const root of realRootsIn(derivative(solved), 0, this.length)) this.coordinates.push(root);
+  }
+
+  /** The coordinates, ascending, without those within 1e-12 of the length of the one before. */
+  distinct(): number[] {
+    const { coordinates, length } = this;
+    coordinates.sort(ascending);
+    const distinct = [coordinates[0] as number];
+    for (let i = 1; i < coordinates.length; i++) {
+      const s = coordinates[i] as number;
+      if (s - (coordinates[i - 1] as number) > 1e-12 * length) distinct.push(s);
+    }
+    return distinct;
+  }
 }
 
-/** The polynomial stress measures of a piece whose extremes must be among the critical coordinates. */
+/** The piece ends and the interior roots of the derivatives of the given polynomials, ascending. */
+export function criticalCoordinates(piece: MemberPiece, polynomials: readonly Polynomial[]): number[] {
+  const search = new CoordinateSearch(piece.end - piece.start);
+  for (const p of polynomials) search.offer(p);
+  return search.distinct();
+}
+
+/**
+ * The polynomial stress measures of a piece whose extremes must be among the critical coordinates,
+ * each a new array: the plain statement of what scanMember forms in buffers.
+ */
 export function stressMeasurePolynomials(piece: MemberPiece, section: SectionProperties): Polynomial[] {
   return measurePolynomials(piece, sectionStressFactors(section));
 }
@@ -113,20 +146,13 @@ function measurePolynomials(piece: MemberPiece, factors: SectionStressFactors): 
   const torsional = scaledPolynomial(torque, factors.torsionalShearPerTorque);
   const torsionalSquaredTimesThree = scaledPolynomial(squarePolynomial(torsional), 3);
   const { perMomentZ, perMomentY } = factors;
-  // Points that share their normal stress (both flange tips under Mz alone) share its square: made once.
-  const squaredByNormal = new PolynomialTable<Polynomial>(0);
   for (let k = 0; k < perMomentZ.length; k++) {
     const normal = sumOfPolynomials(
       axialStress,
       scaledPolynomial(momentZ, perMomentZ[k] as number),
       scaledPolynomial(momentY, perMomentY[k] as number),
     );
-    let squared = squaredByNormal.get(normal);
-    if (squared === undefined) {
-      squared = sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree);
-      squaredByNormal.set(normal, squared);
-    }
-    polynomials.push(normal, squared);
+    polynomials.push(normal, sumOfPolynomials(squarePolynomial(normal), torsionalSquaredTimesThree));
   }
   const axialStressSquared = squarePolynomial(axialStress);
   for (const transverse of [scaledPolynomial(shearY, factors.shearPerForceY), scaledPolynomial(shearZ, factors.shearPerForceZ)]) {
@@ -140,12 +166,80 @@ function measurePolynomials(piece: MemberPiece, factors: SectionStressFactors): 
 
 const SIGNS = [1, -1] as const;
 
+/** The buffers the measures of a piece are formed in, shared by every scan (each runs synchronously). */
+const buffers = {
+  axial: new PolynomialBuffer(),
+  shearY: new PolynomialBuffer(),
+  shearZ: new PolynomialBuffer(),
+  momentZ: new PolynomialBuffer(),
+  momentY: new PolynomialBuffer(),
+  torque: new PolynomialBuffer(),
+  axialStress: new PolynomialBuffer(),
+  axialStressSquared: new PolynomialBuffer(),
+  torsional: new PolynomialBuffer(),
+  torsionalSquaredTimesThree: new PolynomialBuffer(),
+  normal: new PolynomialBuffer(),
+  transverse: new PolynomialBuffer(),
+  shear: new PolynomialBuffer(),
+  first: new PolynomialBuffer(),
+  second: new PolynomialBuffer(),
+  measure: new PolynomialBuffer(),
+};
+
+/**
+ * Offers every polynomial of measurePolynomials, in its order and formed by the same operations, in
+ * buffers instead of new arrays. A square shared by two points is formed twice: the search solves it once.
+ */
+function offerMeasurePolynomials(search: CoordinateSearch, piece: MemberPiece, factors: SectionStressFactors): void {
+  const { axial, shearY, shearZ, momentZ, momentY, torque } = piece.fields;
+  const b = buffers;
+  search.offer(axial);
+  search.offer(shearY);
+  search.offer(shearZ);
+  search.offer(momentZ);
+  search.offer(momentY);
+  search.offer(torque);
+  b.axial.copyOf(axial);
+  b.shearY.copyOf(shearY);
+  b.shearZ.copyOf(shearZ);
+  b.momentZ.copyOf(momentZ);
+  b.momentY.copyOf(momentY);
+  b.torque.copyOf(torque);
+  search.offerBuffer(b.measure.sumOf(b.first.squareOf(b.momentZ), b.second.squareOf(b.momentY)));
+  search.offerBuffer(b.measure.sumOf(b.first.squareOf(b.shearY), b.second.squareOf(b.shearZ)));
+  b.axialStress.scaledOf(b.axial, 1 / factors.area);
+  b.torsional.scaledOf(b.torque, factors.torsionalShearPerTorque);
+  b.torsionalSquaredTimesThree.squareOf(b.torsional).scaledOf(b.torsionalSquaredTimesThree, 3);
+  const { perMomentZ, perMomentY } = factors;
+  for (let k = 0; k < perMomentZ.length; k++) {
+    b.normal.sumOf(b.axialStress, b.first.scaledOf(b.momentZ, perMomentZ[k] as number), b.second.scaledOf(b.momentY, perMomentY[k] as number));
+    search.offerBuffer(b.normal);
+    search.offerBuffer(b.measure.sumOf(b.first.squareOf(b.normal), b.torsionalSquaredTimesThree));
+  }
+  b.axialStressSquared.squareOf(b.axialStress);
+  offerNeutralAxisMeasures(search, b.shearY, factors.shearPerForceY);
+  offerNeutralAxisMeasures(search, b.shearZ, factors.shearPerForceZ);
+}
+
+/** The neutral-axis measures of one direction of transverse shear, with it adding to the torsional shear and against it. */
+function offerNeutralAxisMeasures(search: CoordinateSearch, shearForce: PolynomialBuffer, shearPerForce: number): void {
+  const b = buffers;
+  b.transverse.scaledOf(shearForce, shearPerForce);
+  for (const sign of SIGNS) {
+    b.shear.sumOf(b.torsional, b.first.scaledOf(b.transverse, sign));
+    b.second.squareOf(b.shear).scaledOf(b.second, 3);
+    search.offerBuffer(b.measure.sumOf(b.axialStressSquared, b.second));
+  }
+}
+
 export function scanMember(analysis: MemberAnalysis, section: SectionProperties): MemberScan {
   const factors = sectionStressFactors(section);
-  return {
-    analysis,
-    coordinates: analysis.pieces.map((piece) => criticalCoordinates(piece, measurePolynomials(piece, factors))),
-  };
+  const coordinates = analysis.pieces.map((piece) => {
+    const search = new CoordinateSearch(piece.end - piece.start);
+    offerMeasurePolynomials(search, piece, factors);
+    return search.distinct();
+  });
+  return { analysis, coordinates };
 }
 
 const INVERSE_GOLDEN_RATIO = (Math.sqrt(5) - 1) / 2;
@@ -202,6 +296,20 @@ export function peakOf(scan: MemberScan, measure: Measure, options: { readonly r
   return best;
 }
 
+/** The largest |p(s)| offered so far and where, the first one offered winning a tie. */
+class LargestMagnitude {
+  value = 0;
+  position: number | null = null;
+
+  offer(p: Polynomial, start: number, s: number): void {
+    const magnitude = Math.abs(evaluatePolynomial(p, s));
+    if (magnitude > this.value) {
+      this.value = magnitude;
+      this.position = start + s;
+    }
+  }
+}
+
 /** Largest |field| over [from, to] (ends and interior extremes of every piece inside), and where. */
 export function largestMagnitudeOn(
   analysis: MemberAnalysis,
@@ -209,22 +317,15 @@ export function largestMagnitudeOn(
   from: number,
   to: number,
 ): { readonly value: number; readonly position: number | null } {
-  let value = 0;
-  let position: number | null = null;
+  const largest = new LargestMagnitude();
   for (const piece of analysis.pieces) {
     const lo = Math.max(from, piece.start) - piece.start;
     const hi = Math.min(to, piece.end) - piece.start;
     if (hi < lo) continue;
     const p = piece.fields[field];
-    const candidates = [lo, hi];
-    if (derivativeCanVanish(p)) for (const root of realRootsIn(derivative(p), lo, hi)) candidates.push(root);
-    for (const s of candidates) {
-      const magnitude = Math.abs(evaluatePolynomial(p, s));
-      if (magnitude > value) {
-        value = magnitude;
-        position = piece.start + s;
-      }
-    }
+    largest.offer(p, piece.start, lo);
+    largest.offer(p, piece.start, hi);
+    if (derivativeCanVanish(p)) for (const root of realRootsIn(derivative(p), lo, hi)) largest.offer(p, piece.start, root);
   }
-  return { value, position };
+  return { value: largest.value, position: largest.position };
 }

@@ -67,6 +67,15 @@ function endRestraint(supports: readonly SupportModel[], plane: BucklingPlane): 
   return fixed ? 'fixed' : 'pinned';
 }
 
+/** K = 2 stands in where the supports give none; the check asks for a factor if the member is compressed. */
+function undeterminedFactor(undetermined: string): EffectiveLengthFactor {
+  return {
+    factor: 2.0,
+    basis: `${undetermined}: K not read from the supports, give an effective-length factor`,
+    undetermined,
+  };
+}
+
 /**
  * K from the supports, over the member length:
  * - supports at the two ends only: the idealised end conditions they form;
@@ -82,16 +91,11 @@ export function effectiveLengthFactorFromSupports(
 ): EffectiveLengthFactor {
   const tolerance = 1e-9 * model.length;
   const { translation } = PLANE_DIRECTIONS[plane];
-  const unknown = (undetermined: string): EffectiveLengthFactor => ({
-    factor: 2.0,
-    basis: `${undetermined}: K not read from the supports, give an effective-length factor`,
-    undetermined,
-  });
   // A hinge makes part of the column lean on the rest: K can exceed every tabulated value.
-  if (model.hinges.length > 0) return unknown('the member has internal hinges');
+  if (model.hinges.length > 0) return undeterminedFactor('the member has internal hinges');
   // A translational spring is neither a hold nor free: the critical load depends on its stiffness.
   if (model.supports.some((support) => typeof support.restraints[translation] === 'object')) {
-    return unknown(`a support is a spring along ${translation}`);
+    return undeterminedFactor(`a support is a spring along ${translation}`);
   }
   const atStart: SupportModel[] = [];
   const atEnd: SupportModel[] = [];
@@ -112,7 +116,7 @@ export function effectiveLengthFactorFromSupports(
   // The pair in alphabetical order, as ENDS_TO_CONDITIONS lists it.
   const [first, second] = startEnd <= farEnd ? [startEnd, farEnd] : [farEnd, startEnd];
   const endConditions = ENDS_TO_CONDITIONS[`${first}-${second}`];
-  if (endConditions === undefined) return unknown(`ends ${first} and ${second} form no stable column in this plane`);
+  if (endConditions === undefined) return undeterminedFactor(`ends ${first} and ${second} form no stable column in this plane`);
   return {
     factor: effectiveLengthFactorFor(endConditions, recommendedDesignValues),
     basis: `${endConditions} ends read from the supports`,

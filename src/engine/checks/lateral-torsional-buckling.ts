@@ -65,6 +65,8 @@ interface UnbracedLength {
   readonly unbracedLength: number;
   readonly effectiveLength: number;
   readonly momentGradientFactor: number;
+  /** The largest |momentZ| over [from, to] and where: the demand, also the Mmax of Cb. */
+  readonly demand: { readonly value: number; readonly position: number | null };
 }
 
 const isRigid = (support: SupportModel, direction: 'uz' | 'rx' | 'ry') => support.restraints[direction] === 'rigid';
@@ -84,7 +86,16 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
   const given = lateralTorsional.momentGradientFactor;
   if (lateralTorsional.unbracedLength !== undefined) {
     const length = lateralTorsional.unbracedLength;
-    return [{ from: 0, to: model.length, unbracedLength: length, effectiveLength: length, momentGradientFactor: given ?? 1 }];
+    return [
+      {
+        from: 0,
+        to: model.length,
+        unbracedLength: length,
+        effectiveLength: length,
+        momentGradientFactor: given ?? 1,
+        demand: largestMagnitudeOn(analysis, 'momentZ', 0, model.length),
+      },
+    ];
   }
   if (!model.supports.some(isFork) && largestMagnitudeOn(analysis, 'momentZ', 0, model.length).value > 0) {
     throw new EngineError(
@@ -95,13 +106,15 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
   }
   return segmentsBetweenSupports(model, isFork).map((segment) => {
     const length = segment.to - segment.from;
+    const demand = largestMagnitudeOn(analysis, 'momentZ', segment.from, segment.to);
     if (segment.kind === 'span') {
       return {
         from: segment.from,
         to: segment.to,
         unbracedLength: length,
         effectiveLength: length,
-        momentGradientFactor: given ?? momentGradientFactorOn(analysis, segment.from, segment.to),
+        momentGradientFactor: given ?? momentGradientFactorOn(analysis, segment.from, segment.to, demand.value),
+        demand,
       };
     }
     const fixedRoot = segment.supports.some((support) => isRigid(support, 'rx') && isRigid(support, 'ry'));
@@ -111,23 +124,27 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
       unbracedLength: length,
       effectiveLength: (fixedRoot ? 2 : 3) * length,
       momentGradientFactor: given ?? 1,
+      demand,
     };
   });
+}
+
+function notApplicable(reason: string): { readonly summary: null; readonly findings: CheckFindings } {
+  return { summary: null, findings: { checks: [], notApplicable: [{ mode: 'lateral-torsional-buckling', reason }] } };
 }
 
 export function lateralTorsionalChecks(context: CheckContext): {
   readonly summary: LateralTorsionalSummary | null;
   readonly findings: CheckFindings;
 } {
-  const { section, material, analysis, lateralTorsional = {} } = context.input;
+  const { section, material, lateralTorsional = {} } = context.input;
   const mode = 'lateral-torsional-buckling' as const;
-  const notApplicable = (reason: string) => ({ summary: null, findings: { checks: [], notApplicable: [{ mode, reason }] } });
   if (lateralTorsional.braced) return notApplicable('the compression flange is braced continuously (lateralTorsional.braced)');
   const exclusion = lateralTorsionalExclusion(section);
   if (exclusion !== null) return notApplicable(exclusion);
   let worst: { length: UnbracedLength; moment: number; position: number | null; criticalMoment: number } | null = null;
   for (const length of unbracedLengths(context)) {
-    const demand = largestMagnitudeOn(analysis, 'momentZ', length.from, length.to);
+    const { demand } = length;
     if (demand.value <= 0) continue;
     const criticalMoment = elasticCriticalMoment({
       elasticModulus: material.elasticModulus,

@@ -16,9 +16,16 @@ function ascending(a: number, b: number): number {
   return a - b;
 }
 
-/** The supports within the tolerance of x. */
-function supportsAt(holding: readonly SupportModel[], x: number, tolerance: number): SupportModel[] {
-  const at: SupportModel[] = [];
+/** Positions in ascending order; those already in order (the usual case) are left as they are, as a stable sort would leave them. */
+function inAscendingOrder(positions: number[]): number[] {
+  for (let i = 1; i < positions.length; i++) {
+    if (ascending(positions[i - 1] as number, positions[i] as number) > 0) return positions.sort(ascending);
+  }
+  return positions;
+}
+
+/** The supports within the tolerance of x, added to `at` (a new list by default). */
+function supportsAt(holding: readonly SupportModel[], x: number, tolerance: number, at: SupportModel[] = []): SupportModel[] {
   for (const support of holding) if (Math.abs(support.position - x) <= tolerance) at.push(support);
   return at;
 }
@@ -32,7 +39,7 @@ export function segmentsBetweenSupports(model: MemberModel, holds: (support: Sup
   const holding: SupportModel[] = [];
   for (const support of model.supports) if (holds(support)) holding.push(support);
   if (holding.length === 0) return [{ from: 0, to: model.length, kind: 'span', supports: [] }];
-  const positions = holding.map((support) => support.position).sort(ascending);
+  const positions = inAscendingOrder(holding.map((support) => support.position));
   const merged = [positions[0] as number];
   for (let i = 1; i < positions.length; i++) {
     const x = positions[i] as number;
@@ -45,7 +52,7 @@ export function segmentsBetweenSupports(model: MemberModel, holds: (support: Sup
   for (let i = 0; i + 1 < merged.length; i++) {
     const from = merged[i] as number;
     const to = merged[i + 1] as number;
-    segments.push({ from, to, kind: 'span', supports: [...supportsAt(holding, from, tolerance), ...supportsAt(holding, to, tolerance)] });
+    segments.push({ from, to, kind: 'span', supports: supportsAt(holding, to, tolerance, supportsAt(holding, from, tolerance)) });
   }
   if (last < model.length - tolerance) {
     segments.push({ from: last, to: model.length, kind: 'overhang', supports: supportsAt(holding, last, tolerance) });

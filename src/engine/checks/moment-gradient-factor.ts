@@ -19,10 +19,14 @@ function magnitudeAt(analysis: MemberAnalysis, field: DiagramField, x: number): 
   return Math.max(Math.abs(fieldAt(analysis, field, x, 'left')), Math.abs(fieldAt(analysis, field, x, 'right')));
 }
 
-/** Cb of the strong-axis moment (momentZ) over [from, to]. */
-export function momentGradientFactorOn(analysis: MemberAnalysis, from: number, to: number): number {
+/** Cb of the strong-axis moment (momentZ) over [from, to]; `largest` is its largest |momentZ| when already known. */
+export function momentGradientFactorOn(
+  analysis: MemberAnalysis,
+  from: number,
+  to: number,
+  largest: number = largestMagnitudeOn(analysis, 'momentZ', from, to).value,
+): number {
   const length = to - from;
-  const largest = largestMagnitudeOn(analysis, 'momentZ', from, to).value;
   return momentGradientFactor(
     largest,
     magnitudeAt(analysis, 'momentZ', from + 0.25 * length),

@@ -5,7 +5,7 @@ import { SCREENING_CAUTION } from '../caution.js';
 import type { CheckContext } from './check-context.js';
 import type { FailureCheck } from './check-outcome.js';
 import { largestMagnitudeOn } from './critical-positions.js';
-import { columnAxes, eulerLoad } from './column-buckling.js';
+import { eulerLoad } from './column-buckling.js';
 import { productMomentOf, transverseShearPerForce } from './section-stresses.js';
 
 /** The caution every result opens with. */
@@ -63,10 +63,13 @@ export function defaultsNotice(defaulted: readonly string[]): string {
   return `Default criteria (common practice) stand in for the governing code: ${defaulted.join(', ')}.`;
 }
 
+function wasChecked(checks: readonly FailureCheck[], mode: FailureCheck['mode']): boolean {
+  return checks.some((check) => check.mode === mode);
+}
+
 export function memberNotices(context: CheckContext, checks: readonly FailureCheck[]): string[] {
   const { input, criteria, peaks } = context;
   const { section } = input;
-  const checked = (mode: FailureCheck['mode']) => checks.some((check) => check.mode === mode);
   const notices = [CAUTION_NOTICE, EXCLUSIONS_NOTICE];
   if (criteria.defaulted.length > 0) notices.push(defaultsNotice(criteria.defaulted));
   if (input.material.behaviour === 'brittle') notices.push(BRITTLE_NOTICE);
@@ -82,18 +85,18 @@ export function memberNotices(context: CheckContext, checks: readonly FailureChe
     notices.push(transverseShearPerForce(section).elementary ? ELEMENTARY_SHEAR_NOTICE : AVERAGE_SHEAR_NOTICE);
   }
   if (SOLID_SHAPES.has(section.shape) && hasShearInBothDirections(context)) notices.push(BIAXIAL_SHEAR_NOTICE);
-  if (checked('buckling')) {
+  if (wasChecked(checks, 'buckling')) {
     notices.push(COLUMN_NOTICE);
     const force = peaks.axialCompression.value * section.area;
-    for (const axis of columnAxes(context)) {
+    for (const axis of context.columnAxes) {
       notices.push(`Effective-length factor about the ${axis.axis} axis: K = ${axis.effectiveLengthFactor.factor}, ${axis.effectiveLengthFactor.basis}.`);
       if (force >= eulerLoad(context, axis)) {
         notices.push(`The compressive force reaches the Euler load about the ${axis.axis} axis: the member buckles.`);
       }
     }
   }
-  if (checked('lateral-torsional-buckling')) notices.push(LATERAL_TORSIONAL_NOTICE);
-  if (checked('beam-column')) notices.push(AMPLIFICATION_NOTICE);
+  if (wasChecked(checks, 'lateral-torsional-buckling')) notices.push(LATERAL_TORSIONAL_NOTICE);
+  if (wasChecked(checks, 'beam-column')) notices.push(AMPLIFICATION_NOTICE);
   if (checks.every((check) => check.utilization === 0)) {
     notices.push(NO_DEMAND_NOTICE);
   }

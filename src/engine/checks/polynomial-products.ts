@@ -1,21 +1,16 @@
 /**
  * The polynomial arithmetic of the squared stress measures, whose extremes are roots of a derivative:
  * products, and sums and multiples formed term for term as analysis/polynomial.ts forms them (the same
- * numbers), written out so that the scan of every piece makes no closure and no argument list.
+ * numbers), written out with no closure and no argument list. polynomial-buffer.ts does the same
+ * arithmetic in reused buffers for the scan of every piece.
  */
 
+import { packedZeros } from '../analysis/zero-filled.js';
 import type { Polynomial } from '../analysis/result.js';
-
-/** n zeros in a packed array (new Array(n) would leave it holey, slower to read). */
-function zeros(n: number): number[] {
-  const array: number[] = [];
-  for (let i = 0; i < n; i++) array.push(0);
-  return array;
-}
 
 export function multiplyPolynomials(p: Polynomial, q: Polynomial): number[] {
   if (p.length === 0 || q.length === 0) return [];
-  const product = zeros(p.length + q.length - 1);
+  const product = packedZeros(p.length + q.length - 1);
   for (let i = 0; i < p.length; i++) {
     for (let j = 0; j < q.length; j++) product[i + j] = (product[i + j] as number) + (p[i] as number) * (q[j] as number);
   }
@@ -35,7 +30,7 @@ export function scaledPolynomial(p: Polynomial, factor: number): number[] {
 
 /** a + b (+ c), each sum started from 0 and taken in that order (addPolynomials). */
 export function sumOfPolynomials(a: Polynomial, b: Polynomial, c: Polynomial = []): number[] {
-  const sum = zeros(Math.max(0, a.length, b.length, c.length));
+  const sum = packedZeros(Math.max(0, a.length, b.length, c.length));
   for (let i = 0; i < a.length; i++) sum[i] = (sum[i] as number) + (a[i] as number);
   for (let i = 0; i < b.length; i++) sum[i] = (sum[i] as number) + (b[i] as number);
   for (let i = 0; i < c.length; i++) sum[i] = (sum[i] as number) + (c[i] as number);

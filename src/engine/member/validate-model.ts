@@ -16,6 +16,17 @@ const RIGIDITY_NAMES: Record<keyof MemberStiffness, string> = {
   torsional: 'torsional rigidity GJ',
 };
 
+/** Within [0, length], give or take POSITION_TOLERANCE x length. */
+function isInside(x: number, length: number): boolean {
+  const tolerance = POSITION_TOLERANCE * length;
+  return x >= -tolerance && x <= length + tolerance;
+}
+
+/** The error for a position outside the member; its words are only made for a model that fails. */
+function outsideMember(x: number, length: number, what: string, path: InputPath): EngineError {
+  return new EngineError('outside-member', `${what} at x = ${x} m lies outside the member (0 to ${length} m).`, path);
+}
+
 export function validateMemberModel(model: MemberModel): void {
   const { length } = model;
   if (!(Number.isFinite(length) && length > 0)) {
@@ -27,23 +38,21 @@ export function validateMemberModel(model: MemberModel): void {
   if (model.supports.length === 0) {
     throw new EngineError('outside-member', 'The member has no support, so nothing holds it.', ['member', 'supports']);
   }
-  const tolerance = POSITION_TOLERANCE * length;
-  const requireInside = (x: number, what: string, path: InputPath): void => {
-    if (!(x >= -tolerance && x <= length + tolerance)) {
-      throw new EngineError('outside-member', `${what} at x = ${x} m lies outside the member (0 to ${length} m).`, path);
+  model.supports.forEach((support, i) => {
+    if (!isInside(support.position, length)) {
+      throw outsideMember(support.position, length, `Support ${i + 1}`, ['member', 'supports', i, 'position']);
     }
-  };
-  model.supports.forEach((support, i) =>
-    requireInside(support.position, `Support ${i + 1}`, ['member', 'supports', i, 'position']),
-  );
-  model.hinges.forEach((hinge, i) => requireInside(hinge.position, `Hinge ${i + 1}`, ['member', 'hinges', i, 'position']));
+  });
+  model.hinges.forEach((hinge, i) => {
+    if (!isInside(hinge.position, length)) throw outsideMember(hinge.position, length, `Hinge ${i + 1}`, ['member', 'hinges', i, 'position']);
+  });
   model.loads.forEach((load, i) => {
     if (load.kind === 'point') {
-      requireInside(load.position, `Load ${i + 1}`, ['loads', i, 'position']);
+      if (!isInside(load.position, length)) throw outsideMember(load.position, length, `Load ${i + 1}`, ['loads', i, 'position']);
       return;
     }
-    requireInside(load.from, `The start of load ${i + 1}`, ['loads', i, 'from']);
-    requireInside(load.to, `The end of load ${i + 1}`, ['loads', i, 'to']);
+    if (!isInside(load.from, length)) throw outsideMember(load.from, length, `The start of load ${i + 1}`, ['loads', i, 'from']);
+    if (!isInside(load.to, length)) throw outsideMember(load.to, length, `The end of load ${i + 1}`, ['loads', i, 'to']);
     if (!(load.from < load.to)) {
       throw new EngineError(
         'outside-member',

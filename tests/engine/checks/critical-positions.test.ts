@@ -2,9 +2,15 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { derivative, realRootsIn } from '../../../src/engine/analysis/polynomial.js';
 import type { Polynomial } from '../../../src/engine/analysis/result.js';
-import { criticalCoordinates, largestMagnitudeOn, peakOf, scanMember } from '../../../src/engine/checks/critical-positions.js';
+import {
+  criticalCoordinates,
+  largestMagnitudeOn,
+  peakOf,
+  scanMember,
+  stressMeasurePolynomials,
+} from '../../../src/engine/checks/critical-positions.js';
 import { analysisFrom } from './fixtures/analyses.js';
-import { rectangle, round } from './fixtures/sections.js';
+import { iSection, rectangle, round, tee } from './fixtures/sections.js';
 
 describe('criticalCoordinates', () => {
   it('holds the piece ends and the interior roots of each derivative', () => {
@@ -40,6 +46,32 @@ describe('criticalCoordinates', () => {
         expect(criticalCoordinates(piece!, polynomials)).toStrictEqual(reference(length, polynomials));
       }),
       { numRuns: 300 },
+    );
+  });
+});
+
+describe('scanMember', () => {
+  it('gives each piece the critical coordinates of its stress measure polynomials (property)', () => {
+    // The scan forms the measures in reused buffers; the plain path makes every polynomial anew.
+    const coefficient = fc.oneof(fc.constantFrom(0, -0, 1, -1), fc.double({ min: -1e6, max: 1e6, noNaN: true }));
+    const field = fc.array(coefficient, { minLength: 1, maxLength: 4 });
+    const forces = fc.record({ axial: field, shearY: field, shearZ: field, momentZ: field, momentY: field, torque: field });
+    const sections = [rectangle(0.05, 0.15), round(0.04), iSection(0.2, 0.1, 0.0056, 0.0085), tee()];
+    fc.assert(
+      fc.property(fc.array(forces, { minLength: 1, maxLength: 3 }), fc.constantFrom(...sections), (fields, section) => {
+        const analysis = analysisFrom(
+          fields.length,
+          fields.map((pieceFields, i) => ({ start: i, end: i + 1, fields: pieceFields })),
+        );
+        const scan = scanMember(analysis, section);
+        analysis.pieces.forEach((piece, i) => {
+          const expected = criticalCoordinates(piece, stressMeasurePolynomials(piece, section));
+          const found = scan.coordinates[i] as readonly number[];
+          expect(found.length).toBe(expected.length);
+          found.forEach((s, k) => expect(Object.is(s, expected[k])).toBe(true));
+        });
+      }),
+      { numRuns: 500 },
     );
   });
 });

@@ -20,9 +20,11 @@ export function presentReactions(analysis: MemberAnalysis, labels: readonly (str
 
 /**
  * One column of SI values in a presented unit: one division a value, -0 as 0. Filled by push, so the
- * array is packed: JSON.stringify writes a packed array of doubles about a quarter faster than a holey one.
+ * array is packed: JSON.stringify writes a packed array of doubles about a quarter faster than a holey
+ * one. In SI (factor 1) the column is sent as it is: x / 1 is x, and JSON writes -0 as 0.
  */
-export function presentColumn(values: ArrayLike<number>, factor: number): number[] {
+export function presentColumn(values: readonly number[], factor: number): readonly number[] {
+  if (factor === 1) return values;
   const out: number[] = [];
   for (let i = 0; i < values.length; i++) {
     const value = (values[i] as number) / factor;
@@ -32,7 +34,7 @@ export function presentColumn(values: ArrayLike<number>, factor: number): number
 }
 
 export function presentDiagrams(diagrams: SampledDiagrams, units: OutputUnits) {
-  const out: Record<string, number[]> = { x: presentColumn(diagrams.x, units.factors.length) };
+  const out: Record<string, readonly number[]> = { x: presentColumn(diagrams.x, units.factors.length) };
   for (const field of DIAGRAM_FIELDS) out[field] = presentColumn(diagrams.values[field], units.factors[DIAGRAM_FIELD_INFO[field].kind]);
   return out as Record<'x' | DiagramField, number[]>;
 }

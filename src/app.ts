@@ -36,6 +36,8 @@ export interface AppOptions {
   readonly logger?: FastifyServerOptions['logger'];
   /** What remembered answers may take, bytes; 0 turns the answer cache off. Default 32 MiB. */
   readonly answerCacheBytes?: number;
+  /** An answer cache to use instead of a new one (tests read its counts). */
+  readonly answerCache?: AnswerCache;
 }
 
 export const DEFAULT_BODY_LIMIT = 1024 * 1024;
@@ -65,12 +67,14 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
       sendProblem(reply, problemFromError(error) ?? new ProblemError('invalidInput', error.message));
     },
   });
-  app.addHook('onRequest', async (request, reply) => {
+  app.addHook('onRequest', (request, reply, done) => {
     reply.header('x-request-id', request.id);
+    done();
   });
   // JSON only: without this Fastify would also take text/plain bodies.
   app.removeContentTypeParser('text/plain');
-  registerJsonBody(app);
+  const answers = options.answerCache ?? new AnswerCache(options.answerCacheBytes ?? DEFAULT_ANSWER_CACHE_BYTES);
+  registerJsonBody(app, answers);
   registerErrorHandler(app);
   prepareGracefulShutdown(app);
 
@@ -88,7 +92,6 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   let ready = false;
   const catalogues = options.catalogues ?? (await loadCatalogues({ companyPath: options.companyCataloguePath }));
   const document = buildOpenApiDocument(routeContracts());
-  const answers = new AnswerCache(options.answerCacheBytes ?? DEFAULT_ANSWER_CACHE_BYTES);
 
   await app.register(docsRoutes(document));
   await app.register(

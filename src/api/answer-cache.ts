@@ -61,15 +61,22 @@ export class AnswerCache {
   }
 }
 
+/** The key of an answer: the route's url and the body's text. */
+export function answerKey(url: string, bodyText: string): string {
+  return `${url}\n${bodyText}`;
+}
+
 /**
- * Answers a calculation route: the remembered text when the same body was answered before, else
- * the computed answer, serialised once (finite guard included), remembered and sent.
+ * Answers a calculation route: the remembered text when the same body was answered before (looked up
+ * when the body arrived, see json-body.ts), else the computed answer, serialised once (finite guard
+ * included), remembered and sent.
  */
-export function answerOnce(cache: AnswerCache, request: FastifyRequest, reply: FastifyReply, compute: () => unknown): FastifyReply {
-  const key = cache.enabled && request.bodyText !== '' ? `${request.url}\n${request.bodyText}` : undefined;
-  const known = key === undefined ? undefined : cache.get(key);
-  if (known !== undefined) return sendJsonText(reply, known);
+export function answerOnce(cache: AnswerCache, request: FastifyRequest, reply: FastifyReply, compute: () => unknown): void {
+  if (request.knownAnswer !== '') {
+    sendJsonText(reply, request.knownAnswer);
+    return;
+  }
   const text = finiteJson(compute());
-  if (key !== undefined) cache.set(key, text);
-  return sendJsonText(reply, text);
+  if (cache.enabled && request.bodyText !== '') cache.set(answerKey(request.url, request.bodyText), text);
+  sendJsonText(reply, text);
 }

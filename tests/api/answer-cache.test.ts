@@ -77,6 +77,25 @@ describe('answers through the cache', () => {
     expect(sized.body).not.toBe((await send(cached, '/v1/member-checks', text)).body);
   });
 
+  it('finds a remembered answer when the body arrives, and counts it', async () => {
+    const cache = new AnswerCache(1024 * 1024);
+    const app = await testApp({ answerCache: cache });
+    try {
+      const first = await send(app, '/v1/member-checks', TYPICAL_CHECK);
+      expect(cache.stats).toMatchObject({ entries: 1, hits: 0, misses: 1 });
+      const again = await send(app, '/v1/member-checks', TYPICAL_CHECK);
+      expect(cache.stats).toMatchObject({ entries: 1, hits: 1, misses: 1 });
+      expect(again.body).toBe(first.body);
+      // The same body to another route is another answer.
+      const other = await send(app, '/v1/section-properties', { section: TYPICAL_CHECK.section });
+      await send(app, '/v1/section-properties', { section: TYPICAL_CHECK.section });
+      expect(other.statusCode).toBe(200);
+      expect(cache.stats).toMatchObject({ entries: 2, hits: 2, misses: 2 });
+    } finally {
+      await app.close();
+    }
+  });
+
   it('does not remember problems: a bad body is answered afresh each time', async () => {
     const bad = { ...TYPICAL_CHECK, member: { ...TYPICAL_CHECK.member, length: '4 kg' } };
     for (let i = 0; i < 2; i++) {

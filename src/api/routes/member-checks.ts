@@ -25,8 +25,8 @@ export const memberCheckContract: RouteContract = {
 
 export function memberCheckRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-checks', async (request, reply) =>
-      answerOnce(answers, request, reply, () => runMemberCheck(parseBody(memberCheckRequest, request.body), catalogues)),
-    );
+    app.post('/v1/member-checks', (request, reply) => {
+      answerOnce(answers, request, reply, () => runMemberCheck(parseBody(memberCheckRequest, request.body), catalogues));
+    });
   };
 }

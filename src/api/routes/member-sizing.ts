@@ -25,8 +25,8 @@ export const memberSizingContract: RouteContract = {
 
 export function memberSizingRoutes(catalogues: LoadedCatalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-sizing', async (request, reply) =>
-      answerOnce(answers, request, reply, () => runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues)),
-    );
+    app.post('/v1/member-sizing', (request, reply) => {
+      answerOnce(answers, request, reply, () => runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues));
+    });
   };
 }

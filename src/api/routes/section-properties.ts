@@ -30,16 +30,21 @@ export const sectionPropertiesContract: RouteContract = {
 
 export function sectionPropertiesRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/section-properties', async (request, reply) => answerOnce(answers, request, reply, () => {
-      const body = parseBody(sectionPropertiesRequest, request.body);
-      const reader = new QuantityReader();
-      const section = resolveSection(body.section, catalogues.sections, reader, ['section']);
-      const material = body.material === undefined ? undefined : resolveMaterial(body.material, catalogues.materials, reader, ['material']);
-      const units = resolveOutputUnits(body.output?.units, ['output', 'units']);
-      reader.finish();
-      const resolved = section();
-      const density = material?.density;
-      return { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION] };
-    }));
+    app.post('/v1/section-properties', (request, reply) => {
+      answerOnce(answers, request, reply, () => sectionPropertiesAnswer(request.body, catalogues));
+    });
   };
+}
+
+/** The section's properties in the requested units, with the material's mass per length when one is given. */
+function sectionPropertiesAnswer(requestBody: unknown, catalogues: Catalogues) {
+  const body = parseBody(sectionPropertiesRequest, requestBody);
+  const reader = new QuantityReader();
+  const section = resolveSection(body.section, catalogues.sections, reader, ['section']);
+  const material = body.material === undefined ? undefined : resolveMaterial(body.material, catalogues.materials, reader, ['material']);
+  const units = resolveOutputUnits(body.output?.units, ['output', 'units']);
+  reader.finish();
+  const resolved = section();
+  const density = material?.density;
+  return { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION] };
 }

@@ -24,7 +24,8 @@ function typicalCheck(i: number) {
 }
 
 export async function run(): Promise<string> {
-  const app = await buildApp();
+  // The answer cache off: the single check is sent again and again, and its work is what is measured.
+  const app = await buildApp({ answerCacheBytes: 0 });
   const items = Array.from({ length: 1000 }, (_, i) => typicalCheck(i));
   const batchBody = JSON.stringify({ items });
   const { id: _id, ...singleCheck } = typicalCheck(3);

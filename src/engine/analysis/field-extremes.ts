@@ -5,8 +5,9 @@
  * the first position wins; a value that small is reported as exactly 0.
  */
 
-import { derivative, evaluatePolynomial, realRootsIn } from './polynomial.js';
-import { DIAGRAM_FIELDS, type DiagramField, type Extreme, type FieldExtremes, type MemberPiece, type Polynomial } from './result.js';
+import { derivativeCanVanish, evaluatePolynomial, isZeroPolynomial } from './polynomial.js';
+import { type DiagramField, type Extreme, type FieldExtremes, type MemberPiece, type Polynomial } from './result.js';
+import { solveStationaryPoints } from './stationary-points.js';
 import { roundedToZero, ZERO_TOLERANCE } from './tolerances.js';
 
 /**
@@ -61,7 +62,8 @@ function extremesOf(candidates: Candidates): FieldExtremes {
 
 /**
  * Adds the values of p at the roots of p' inside (0, length). A quadratic p has one candidate, found
- * directly; higher degrees go through realRootsIn.
+ * directly; higher degrees go through realRootsIn, once for the analysis and its checks
+ * (stationary-points.ts). A p' that is constant has no root: realRootsIn trims it to nothing.
  */
 function pushInteriorStationary(candidates: Candidates, p: Polynomial, start: number, length: number): void {
   if (p.length < 3) return;
@@ -71,22 +73,55 @@ function pushInteriorStationary(candidates: Candidates, p: Polynomial, start: nu
     if (c2 !== 0 && s > 0 && s < length) candidates.push(evaluatePolynomial(p, s), start + s);
     return;
   }
-  for (const s of realRootsIn(derivative(p), 0, length)) candidates.push(evaluatePolynomial(p, s), start + s);
+  if (!derivativeCanVanish(p)) return;
+  const roots = solveStationaryPoints(p, length);
+  for (let i = 0; i < roots.length; i++) {
+    const s = roots[i] as number;
+    candidates.push(evaluatePolynomial(p, s), start + s);
+  }
 }
 
-export function fieldExtremes(pieces: readonly MemberPiece[]): Record<DiagramField, FieldExtremes> {
-  const result = {} as Record<DiagramField, FieldExtremes>;
-  const candidates = fieldCandidates;
-  for (const field of DIAGRAM_FIELDS) {
-    candidates.count = 0;
-    for (const piece of pieces) {
-      const p = piece.fields[field];
-      const length = piece.end - piece.start;
-      candidates.push(evaluatePolynomial(p, 0), piece.start);
-      pushInteriorStationary(candidates, p, piece.start, length);
-      candidates.push(evaluatePolynomial(p, length), piece.end);
-    }
-    result[field] = extremesOf(candidates);
+/** Whether the field is zero on every piece (an unloaded direction): common, and its extremes known. */
+function isZeroField(pieces: readonly MemberPiece[], field: DiagramField): boolean {
+  for (let j = 0; j < pieces.length; j++) if (!isZeroPolynomial((pieces[j] as MemberPiece).fields[field])) return false;
+  return pieces.length > 0;
+}
+
+/**
+ * The extremes of one field over the pieces. A field zero everywhere gives +0 at every candidate, so
+ * both extremes are 0 at the first one, the start of the member, as the search would find them.
+ */
+function extremesOfField(pieces: readonly MemberPiece[], field: DiagramField): FieldExtremes {
+  if (isZeroField(pieces, field)) {
+    const start = (pieces[0] as MemberPiece).start;
+    return { max: { value: 0, position: start }, min: { value: 0, position: start } };
   }
-  return result;
+  const candidates = fieldCandidates;
+  candidates.count = 0;
+  for (let j = 0; j < pieces.length; j++) {
+    const piece = pieces[j] as MemberPiece;
+    const p = piece.fields[field];
+    const length = piece.end - piece.start;
+    candidates.push(evaluatePolynomial(p, 0), piece.start);
+    pushInteriorStationary(candidates, p, piece.start, length);
+    candidates.push(evaluatePolynomial(p, length), piece.end);
+  }
+  return extremesOf(candidates);
+}
+
+/** Every field's extremes, in the order of DIAGRAM_FIELDS; written out, so that the result is made with its keys at once. */
+export function fieldExtremes(pieces: readonly MemberPiece[]): Record<DiagramField, FieldExtremes> {
+  return {
+    axial: extremesOfField(pieces, 'axial'),
+    shearY: extremesOfField(pieces, 'shearY'),
+    momentZ: extremesOfField(pieces, 'momentZ'),
+    shearZ: extremesOfField(pieces, 'shearZ'),
+    momentY: extremesOfField(pieces, 'momentY'),
+    torque: extremesOfField(pieces, 'torque'),
+    deflectionY: extremesOfField(pieces, 'deflectionY'),
+    slopeZ: extremesOfField(pieces, 'slopeZ'),
+    deflectionZ: extremesOfField(pieces, 'deflectionZ'),
+    slopeY: extremesOfField(pieces, 'slopeY'),
+    twist: extremesOfField(pieces, 'twist'),
+  };
 }

@@ -12,6 +12,24 @@ export function evaluatePolynomial(p: Polynomial, s: number): number {
   return value;
 }
 
+/**
+ * Whether every coefficient is zero (of either sign). Such a p evaluates to +0 at every s >= 0 (each
+ * Horner step adds a zero to a +0), so a search for its largest value can pass it over.
+ */
+export function isZeroPolynomial(p: Polynomial): boolean {
+  for (let i = 0; i < p.length; i++) if ((p[i] as number) !== 0) return false;
+  return true;
+}
+
+/**
+ * Whether p' can have a root: a non-zero coefficient beyond the linear one among the first `terms`.
+ * Without one p' is a constant, and realRootsIn finds no root of it.
+ */
+export function derivativeCanVanish(p: Polynomial, terms: number = p.length): boolean {
+  for (let i = 2; i < terms; i++) if ((p[i] as number) !== 0) return true;
+  return false;
+}
+
 export function derivative(p: Polynomial): number[] {
   const d: number[] = [];
   for (let i = 1; i < p.length; i++) d.push(i * (p[i] as number));

@@ -111,6 +111,33 @@ export function resolveCriteria(
     shearYieldRatio: DEFAULT_CRITERIA.shearYieldRatio,
   },
 ): ResolvedCriteria {
+  const givesNone =
+    partial.requiredSafetyFactor === undefined &&
+    partial.deflectionLimitRatio === undefined &&
+    partial.cantileverDeflectionLimitRatio === undefined &&
+    partial.allowedTwist === undefined;
+  if (!givesNone) return criteriaFilledIn(partial, material);
+  const known = allDefaultCriteria.get(material.behaviour);
+  if (known !== undefined && Object.is(known.shearYieldRatio, partial.shearYieldRatio ?? material.shearYieldRatio)) return known;
+  const made = frozenCriteria(criteriaFilledIn(partial, material));
+  allDefaultCriteria.set(material.behaviour, made);
+  return made;
+}
+
+/**
+ * The criteria of a request that gives no factor and no limit, by material behaviour, with the shear
+ * yield ratio they were made for: most requests give none, so these are filled in once, and frozen
+ * since every such check shares them.
+ */
+const allDefaultCriteria = new Map<Material['behaviour'], ResolvedCriteria>();
+
+function frozenCriteria(criteria: ResolvedCriteria): ResolvedCriteria {
+  Object.freeze(criteria.requiredSafetyFactor);
+  Object.freeze(criteria.defaulted);
+  return Object.freeze(criteria);
+}
+
+function criteriaFilledIn(partial: CriteriaInput, material: Pick<Material, 'behaviour' | 'shearYieldRatio'>): ResolvedCriteria {
   const defaulted: (keyof CriteriaInput)[] = [];
   const given = partial.requiredSafetyFactor;
   if (given === undefined) defaulted.push('requiredSafetyFactor');

@@ -8,7 +8,8 @@
  * with an axial force, a brittle failure criterion) is also searched between them by golden section.
  */
 
-import { derivative, evaluatePolynomial, realRootsIn } from '../analysis/polynomial.js';
+import { derivativeCanVanish, evaluatePolynomial, isZeroPolynomial, realRootsIn } from '../analysis/polynomial.js';
+import { stationaryPointsOn } from '../analysis/stationary-points.js';
 import type { DiagramField, MemberAnalysis, MemberPiece, Polynomial } from '../analysis/result.js';
 import type { SectionProperties } from '../sections/section-properties.js';
 import { PolynomialBuffer } from './polynomial-buffer.js';
@@ -37,36 +38,33 @@ export interface Peak {
   readonly location: string | null;
 }
 
-/** A polynomial of degree two or more with a non-zero coefficient beyond the linear one: its derivative can have a root. */
-function derivativeCanVanish(p: Polynomial, terms: number = p.length): boolean {
-  for (let i = 2; i < terms; i++) if ((p[i] as number) !== 0) return true;
-  return false;
-}
-
 /**
- * Polynomials with distinct derivatives, kept by their last coefficient so that an equal one is found
- * without comparing it with every other. Equal means the same coefficients from index 1 on, signed
- * zeros told apart: the same derivative and so the same roots. A polynomial is given by its first
- * `terms` coefficients, so that one held in a buffer is looked up without a copy.
+ * Polynomials with distinct derivatives, kept as copies in arrays reused from piece to piece. Equal
+ * means the same coefficients from index 1 on, signed zeros told apart: the same derivative and so the
+ * same roots. A polynomial is given by its first `terms` coefficients, so that one held in a buffer is
+ * looked up without a copy. A piece offers a score of polynomials at most, so a plain list is searched
+ * faster than a map of them is built.
  */
 class DerivativeSet {
-  private readonly buckets = new Map<number, Polynomial[]>();
+  private readonly kept: number[][] = [];
+  private count = 0;
 
-  /**
-   * Keeps the polynomial unless one with its derivative is kept already, and returns what it kept
-   * (a copy of the coefficients with `copy`, for a buffer that is reused), or undefined.
-   */
-  addIfNew(p: Polynomial, terms: number, copy: boolean): Polynomial | undefined {
-    const last = p[terms - 1] as number;
-    let bucket = this.buckets.get(last);
-    if (bucket === undefined) {
-      bucket = [];
-      this.buckets.set(last, bucket);
+  clear(): void {
+    this.count = 0;
+  }
+
+  /** Keeps a copy of the polynomial unless one with its derivative is kept already, and returns the copy, or undefined. */
+  addIfNew(p: Polynomial, terms: number): Polynomial | undefined {
+    const { kept } = this;
+    for (let k = 0; k < this.count; k++) if (sameDerivative(kept[k] as number[], p, terms)) return undefined;
+    let key = kept[this.count];
+    if (key !== undefined && key.length === terms) {
+      for (let i = 0; i < terms; i++) key[i] = p[i] as number;
     } else {
-      for (const key of bucket) if (sameDerivative(key, p, terms)) return undefined;
+      key = p.slice(0, terms);
+      kept[this.count] = key;
     }
-    const key = copy ? p.slice(0, terms) : p;
-    bucket.push(key);
+    this.count++;
     return key;
   }
 }
@@ -77,42 +75,82 @@ function sameDerivative(key: Polynomial, p: Polynomial, terms: number): boolean 
   return true;
 }
 
-function ascending(a: number, b: number): number {
-  return a - b;
+/** Derivatives written into arrays of their exact length, one per length, reused (each root search runs synchronously). */
+const derivativesByTerms: number[][] = [];
+
+/** derivative(p) (polynomial.ts) in a reused array: the same numbers. */
+function derivativeInBuffer(p: Polynomial): Polynomial {
+  const terms = p.length - 1;
+  let d = derivativesByTerms[terms];
+  if (d === undefined) {
+    d = [];
+    for (let i = 0; i < terms; i++) d.push(0);
+    derivativesByTerms[terms] = d;
+  }
+  for (let i = 1; i < p.length; i++) d[i - 1] = i * (p[i] as number);
+  return d;
+}
+
+/**
+ * Sorts in place as sort((a, b) => a - b) does: ascending, and stable, so that equal numbers (+0 and
+ * -0) keep their order. The few coordinates of a piece are sorted faster by insertion than by the
+ * built-in sort calling a comparator; none is NaN (each lies in [0, length]), so both agree.
+ */
+function sortAscending(values: number[]): void {
+  for (let i = 1; i < values.length; i++) {
+    const value = values[i] as number;
+    let j = i - 1;
+    while (j >= 0 && (values[j] as number) - value > 0) {
+      values[j + 1] = values[j] as number;
+      j--;
+    }
+    values[j + 1] = value;
+  }
 }
 
 /**
  * The piece ends and the interior roots of the derivatives of the polynomials offered, ascending.
  * A derivative that is constant has no root, and one met before adds nothing, so neither is solved.
+ * One search serves piece after piece (start clears it).
  */
 class CoordinateSearch {
-  private readonly coordinates: number[];
+  private coordinates: number[] = [];
   private readonly solved = new DerivativeSet();
+  private length = 0;
 
-  constructor(private readonly length: number) {
+  start(length: number): this {
+    this.length = length;
     this.coordinates = [0, length];
+    this.solved.clear();
+    return this;
   }
 
-  offer(p: Polynomial): void {
-    this.solveIfNew(p, p.length, false);
+  /** Offers a field of the piece: its roots are those the analysis found (stationary-points.ts). */
+  offerField(p: Polynomial): void {
+    if (!derivativeCanVanish(p) || this.solved.addIfNew(p, p.length) === undefined) return;
+    this.pushAll(stationaryPointsOn(p, this.length));
   }
 
-  /** Offers what the buffer holds now; a copy is kept if it is solved, since the buffer is reused. */
-  offerBuffer(buffer: PolynomialBuffer): void {
-    this.solveIfNew(buffer.coefficients, buffer.terms, true);
-  }
-
-  private solveIfNew(p: Polynomial, terms: number, copy: boolean): void {
+  /** Offers the first `terms` coefficients of p, solved here: what a buffer holds now, or any polynomial. */
+  offerPolynomial(p: Polynomial, terms: number = p.length): void {
     if (!derivativeCanVanish(p, terms)) return;
-    const solved = this.solved.addIfNew(p, terms, copy);
+    const solved = this.solved.addIfNew(p, terms);
     if (solved === undefined) return;
-    for (const root of realRootsIn(derivative(solved), 0, this.length)) this.coordinates.push(root);
+    this.pushAll(realRootsIn(derivativeInBuffer(solved), 0, this.length));
+  }
+
+  offerBuffer(buffer: PolynomialBuffer): void {
+    this.offerPolynomial(buffer.coefficients, buffer.terms);
+  }
+
+  private pushAll(roots: readonly number[]): void {
+    for (let i = 0; i < roots.length; i++) this.coordinates.push(roots[i] as number);
   }
 
   /** The coordinates, ascending, without those within 1e-12 of the length of the one before. */
   distinct(): number[] {
     const { coordinates, length } = this;
-    coordinates.sort(ascending);
+    sortAscending(coordinates);
     const distinct = [coordinates[0] as number];
     for (let i = 1; i < coordinates.length; i++) {
       const s = coordinates[i] as number;
@@ -122,10 +160,13 @@ class CoordinateSearch {
   }
 }
 
+/** The search every scan uses, one piece at a time. */
+const sharedSearch = new CoordinateSearch();
+
 /** The piece ends and the interior roots of the derivatives of the given polynomials, ascending. */
 export function criticalCoordinates(piece: MemberPiece, polynomials: readonly Polynomial[]): number[] {
-  const search = new CoordinateSearch(piece.end - piece.start);
-  for (const p of polynomials) search.offer(p);
+  const search = sharedSearch.start(piece.end - piece.start);
+  for (const p of polynomials) search.offerPolynomial(p);
   return search.distinct();
 }
 
@@ -193,12 +234,12 @@ const buffers = {
 function offerMeasurePolynomials(search: CoordinateSearch, piece: MemberPiece, factors: SectionStressFactors): void {
   const { axial, shearY, shearZ, momentZ, momentY, torque } = piece.fields;
   const b = buffers;
-  search.offer(axial);
-  search.offer(shearY);
-  search.offer(shearZ);
-  search.offer(momentZ);
-  search.offer(momentY);
-  search.offer(torque);
+  search.offerField(axial);
+  search.offerField(shearY);
+  search.offerField(shearZ);
+  search.offerField(momentZ);
+  search.offerField(momentY);
+  search.offerField(torque);
   b.axial.copyOf(axial);
   b.shearY.copyOf(shearY);
   b.shearZ.copyOf(shearZ);
@@ -234,11 +275,13 @@ function offerNeutralAxisMeasures(search: CoordinateSearch, shearForce: Polynomi
 
 export function scanMember(analysis: MemberAnalysis, section: SectionProperties): MemberScan {
   const factors = sectionStressFactors(section);
-  const coordinates = analysis.pieces.map((piece) => {
-    const search = new CoordinateSearch(piece.end - piece.start);
-    offerMeasurePolynomials(search, piece, factors);
-    return search.distinct();
-  });
+  const { pieces } = analysis;
+  const coordinates: number[][] = [];
+  for (let i = 0; i < pieces.length; i++) {
+    const piece = pieces[i] as MemberPiece;
+    offerMeasurePolynomials(sharedSearch.start(piece.end - piece.start), piece, factors);
+    coordinates.push(sharedSearch.distinct());
+  }
   return { analysis, coordinates };
 }
 
@@ -323,9 +366,14 @@ export function largestMagnitudeOn(
     const hi = Math.min(to, piece.end) - piece.start;
     if (hi < lo) continue;
     const p = piece.fields[field];
+    // A zero field is +0 everywhere on the piece: nothing there exceeds the 0 the search starts from.
+    if (isZeroPolynomial(p)) continue;
     largest.offer(p, piece.start, lo);
     largest.offer(p, piece.start, hi);
-    if (derivativeCanVanish(p)) for (const root of realRootsIn(derivative(p), lo, hi)) largest.offer(p, piece.start, root);
+    if (!derivativeCanVanish(p)) continue;
+    // The whole piece: the roots the analysis found are the same numbers.
+    const roots = lo === 0 && hi === piece.end - piece.start ? stationaryPointsOn(p, hi) : realRootsIn(derivativeInBuffer(p), lo, hi);
+    for (let i = 0; i < roots.length; i++) largest.offer(p, piece.start, roots[i] as number);
   }
   return { value: largest.value, position: largest.position };
 }

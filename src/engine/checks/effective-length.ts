@@ -114,21 +114,29 @@ export function effectiveLengthFactorFromSupports(
       : { factor: 1.0, basis: 'intermediate lateral supports: K = 1 over the member length (conservative)' };
   }
   // The pair in alphabetical order, as ENDS_TO_CONDITIONS lists it.
-  const [first, second] = startEnd <= farEnd ? [startEnd, farEnd] : [farEnd, startEnd];
-  const endConditions = ENDS_TO_CONDITIONS[`${first}-${second}`];
+  const first = startEnd <= farEnd ? startEnd : farEnd;
+  const second = startEnd <= farEnd ? farEnd : startEnd;
+  const endConditions = ENDS_TO_CONDITIONS[first][second];
   if (endConditions === undefined) return undeterminedFactor(`ends ${first} and ${second} form no stable column in this plane`);
   return {
     factor: effectiveLengthFactorFor(endConditions, recommendedDesignValues),
-    basis: `${endConditions} ends read from the supports`,
+    basis: BASIS_FROM_SUPPORTS[endConditions],
   };
 }
 
-/** Sorted pairs of end restraints to the idealised end conditions. */
-const ENDS_TO_CONDITIONS: Readonly<Record<string, EndConditions | undefined>> = {
-  'fixed-fixed': 'fixed-fixed',
-  'fixed-pinned': 'fixed-pinned',
-  'pinned-pinned': 'pinned-pinned',
-  'fixed-free': 'fixed-free',
+/** Pairs of end restraints, the first before the second alphabetically, to the idealised end conditions. */
+const ENDS_TO_CONDITIONS: Readonly<Record<EndRestraint, Readonly<Partial<Record<EndRestraint, EndConditions>>>>> = {
+  fixed: { fixed: 'fixed-fixed', pinned: 'fixed-pinned', free: 'fixed-free' },
+  pinned: { pinned: 'pinned-pinned' },
+  free: {},
+};
+
+/** The basis of a K read from the supports, written once for each end condition. */
+const BASIS_FROM_SUPPORTS: Readonly<Record<EndConditions, string>> = {
+  'fixed-fixed': 'fixed-fixed ends read from the supports',
+  'fixed-pinned': 'fixed-pinned ends read from the supports',
+  'pinned-pinned': 'pinned-pinned ends read from the supports',
+  'fixed-free': 'fixed-free ends read from the supports',
 };
 
 /** K for one plane: the per-axis factor, else the common factor, else the end conditions, else the supports. */

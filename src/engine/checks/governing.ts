@@ -11,7 +11,9 @@ export const TIE_TOLERANCE = 1e-9;
 
 /** null when no check has any demand. */
 export function governingFailure(checks: readonly FailureCheck[]): GoverningFailure | null {
-  const highest = Math.max(0, ...checks.map((check) => check.utilization));
+  // Math.max over 0 and every utilization, taken one at a time (the same largest, without an array).
+  let highest = 0;
+  for (const check of checks) highest = Math.max(highest, check.utilization);
   if (highest === 0) return null;
   let chosen: FailureCheck | null = null;
   for (const check of checks) {

@@ -17,6 +17,7 @@ import { failureCheck } from './failure-check.js';
 import { rangeLabel } from './labels.js';
 import { segmentsBetweenSupports } from './member-segments.js';
 import { momentGradientFactorOn } from './moment-gradient-factor.js';
+import { fourSignificantText } from './number-texts.js';
 
 /** Common practice: a solid rectangle at least twice as deep as wide counts as a narrow, deep beam. */
 export const NARROW_RECTANGLE_DEPTH_RATIO = 2;
@@ -180,7 +181,7 @@ export function lateralTorsionalChecks(context: CheckContext): {
           requiredSafetyFactor: context.criteria.requiredSafetyFactor[mode],
           position: worst.position,
           location: `unbraced length ${rangeLabel(length.from, length.to)}`,
-          basis: `largest |Mz| against the elastic M_cr = C1 (pi / L) sqrt(E Iy G J) sqrt(1 + pi^2 E Iw / (G J L^2)), C1 = ${Number(length.momentGradientFactor.toPrecision(4))} (Timoshenko & Gere 2nd ed., ch. 6, from memory; Cb by AISC 360-16 eq. F1-1, from memory)`,
+          basis: `largest |Mz| against the elastic M_cr = C1 (pi / L) sqrt(E Iy G J) sqrt(1 + pi^2 E Iw / (G J L^2)), C1 = ${fourSignificantText(length.momentGradientFactor)} (Timoshenko & Gere 2nd ed., ch. 6, from memory; Cb by AISC 360-16 eq. F1-1, from memory)`,
         }),
       ],
       notApplicable: [],

@@ -59,8 +59,18 @@ const WARPING_SHAPES = new Set(['i-section', 'channel']);
 /** Non-circular sections whose two transverse shear peaks can meet at one point. */
 const SOLID_SHAPES = new Set(['rectangle', 'custom']);
 
+/** The notice of the shared, frozen list of the criteria that are filled in by default (criteria.ts), written once. */
+let frozenDefaulted: readonly string[] | null = null;
+let frozenDefaultedNotice = '';
+
 export function defaultsNotice(defaulted: readonly string[]): string {
-  return `Default criteria (common practice) stand in for the governing code: ${defaulted.join(', ')}.`;
+  if (defaulted === frozenDefaulted) return frozenDefaultedNotice;
+  const notice = `Default criteria (common practice) stand in for the governing code: ${defaulted.join(', ')}.`;
+  if (Object.isFrozen(defaulted)) {
+    frozenDefaulted = defaulted;
+    frozenDefaultedNotice = notice;
+  }
+  return notice;
 }
 
 function wasChecked(checks: readonly FailureCheck[], mode: FailureCheck['mode']): boolean {

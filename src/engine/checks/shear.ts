@@ -2,6 +2,7 @@
 
 import type { CheckContext, CheckFindings } from './check-context.js';
 import { failureCheck } from './failure-check.js';
+import { fourDecimalText } from './number-texts.js';
 
 export function shearChecks(context: CheckContext): CheckFindings {
   const { input, strengths, criteria } = context;
@@ -12,7 +13,7 @@ export function shearChecks(context: CheckContext): CheckFindings {
       : 'the larger of the y and z directions';
   const strength =
     strengths.shear.symbol === 'Ssy'
-      ? `Ssy = ${criteria.shearYieldRatio.toFixed(4)} Sy`
+      ? `Ssy = ${fourDecimalText(criteria.shearYieldRatio)} Sy`
       : `${strengths.shear.symbol} (modified Mohr in pure shear)`;
   return {
     checks: [

@@ -10,7 +10,7 @@
  * stretch that an upper bound shows to lie below the peak already found there (equivalent-stress-bound.ts).
  */
 
-import { evaluatePolynomial } from '../analysis/polynomial.js';
+import { evaluatePolynomial, isZeroPolynomial } from '../analysis/polynomial.js';
 import type { MemberPiece } from '../analysis/result.js';
 import type { Material } from '../materials/material.js';
 import type { MemberCheckInput } from './check-input.js';
@@ -67,6 +67,14 @@ class StressMeasures {
   private transverse = 0;
   private transverseLocation = NEUTRAL_AXIS;
   private equivalentLocation: string | null = null;
+  /** The piece last read, and which of its force fields are zero (+0 at every s >= 0, so not evaluated). */
+  private piece: MemberPiece | null = null;
+  private axialIsZero = false;
+  private shearYIsZero = false;
+  private shearZIsZero = false;
+  private momentZIsZero = false;
+  private momentYIsZero = false;
+  private torqueIsZero = false;
 
   constructor(
     private readonly factors: SectionStressFactors,
@@ -139,12 +147,13 @@ class StressMeasures {
   /** sectionForcesOnPiece, then the fibre bending stresses and the transverse shear stress. */
   private readForces(piece: MemberPiece, s: number): void {
     const { fields } = piece;
-    this.axial = evaluatePolynomial(fields.axial, s);
-    this.shearY = evaluatePolynomial(fields.shearY, s);
-    this.shearZ = evaluatePolynomial(fields.shearZ, s);
-    this.momentZ = evaluatePolynomial(fields.momentZ, s);
-    this.momentY = evaluatePolynomial(fields.momentY, s);
-    this.torque = evaluatePolynomial(fields.torque, s);
+    if (piece !== this.piece) this.noteZeroFields(piece);
+    this.axial = this.axialIsZero ? 0 : evaluatePolynomial(fields.axial, s);
+    this.shearY = this.shearYIsZero ? 0 : evaluatePolynomial(fields.shearY, s);
+    this.shearZ = this.shearZIsZero ? 0 : evaluatePolynomial(fields.shearZ, s);
+    this.momentZ = this.momentZIsZero ? 0 : evaluatePolynomial(fields.momentZ, s);
+    this.momentY = this.momentYIsZero ? 0 : evaluatePolynomial(fields.momentY, s);
+    this.torque = this.torqueIsZero ? 0 : evaluatePolynomial(fields.torque, s);
     const { factors } = this;
     fibreBendingStresses(factors, this.momentZ, this.momentY, this.fibres);
     if (factors.resultant) {
@@ -156,6 +165,18 @@ class StressMeasures {
     const alongZ = factors.shearPerForceZ * Math.abs(this.shearZ);
     this.transverse = alongZ > alongY ? alongZ : alongY;
     this.transverseLocation = alongZ > alongY ? NEUTRAL_AXIS_ALONG_Z : NEUTRAL_AXIS_ALONG_Y;
+  }
+
+  /** A member is seldom loaded in every direction: most of its force fields are zero on a piece. */
+  private noteZeroFields(piece: MemberPiece): void {
+    const { fields } = piece;
+    this.piece = piece;
+    this.axialIsZero = isZeroPolynomial(fields.axial);
+    this.shearYIsZero = isZeroPolynomial(fields.shearY);
+    this.shearZIsZero = isZeroPolynomial(fields.shearZ);
+    this.momentZIsZero = isZeroPolynomial(fields.momentZ);
+    this.momentYIsZero = isZeroPolynomial(fields.momentY);
+    this.torqueIsZero = isZeroPolynomial(fields.torque);
   }
 
   /**

@@ -15,6 +15,13 @@ function pieces(field: DiagramField, parts: readonly { start: number; end: numbe
 }
 
 describe('fieldExtremes', () => {
+  it('reports a field that is zero on every piece as 0 at the start of the member, as the search finds it', () => {
+    // Zeros of either sign evaluate to +0 everywhere: every candidate ties, and the first is at x = 0.5.
+    const e = fieldExtremes(pieces('momentZ', [{ start: 0.5, end: 1, p: [0, -0, 0, -0] }, { start: 1, end: 2, p: [-0] }]));
+    expect(e.momentZ).toEqual({ max: { value: 0, position: 0.5 }, min: { value: 0, position: 0.5 } });
+    expect(Object.is(e.momentZ.max.value, 0) && Object.is(e.twist.min.value, 0)).toBe(true);
+  });
+
   it('finds an interior maximum at the root of the derivative, not at a node', () => {
     // p = s (1 - s): p' = 1 - 2s vanishes at 1/2, where p = 1/4.
     const e = fieldExtremes(pieces('momentZ', [{ start: 0, end: 1, p: [0, 1, -1] }]));

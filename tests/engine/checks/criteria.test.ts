@@ -20,6 +20,17 @@ describe('resolveCriteria', () => {
     expect(criteria.defaulted).toEqual(['requiredSafetyFactor', 'deflectionLimitRatio', 'cantileverDeflectionLimitRatio', 'allowedTwist']);
   });
 
+  it('fills in the criteria of a request that gives none once per material behaviour and shares them, frozen', () => {
+    const first = resolveCriteria({}, steel);
+    expect(resolveCriteria({ shearYieldRatio: undefined }, steel)).toBe(first);
+    expect(Object.isFrozen(first) && Object.isFrozen(first.requiredSafetyFactor) && Object.isFrozen(first.defaulted)).toBe(true);
+    // Another shear yield ratio or another behaviour gets its own criteria; a given limit is never shared.
+    expect(resolveCriteria({ shearYieldRatio: 0.5 }, steel).shearYieldRatio).toBe(0.5);
+    expect(resolveCriteria({}, castIron).requiredSafetyFactor.bending).toBe(2.0);
+    expect(resolveCriteria({}, steel)).toEqual(first);
+    expect(Object.isFrozen(resolveCriteria({ deflectionLimitRatio: 360 }, steel))).toBe(false);
+  });
+
   it('gives every failure mode a factor', () => {
     const criteria = resolveCriteria();
     for (const mode of FAILURE_MODES) expect(criteria.requiredSafetyFactor[mode]).toBeGreaterThan(0);

@@ -1,5 +1,6 @@
 /** GET /v1/materials and GET /v1/materials/{grade}: the material catalogues. */
 
+import { finiteJson, sendJsonText } from '../answer-json.js';
 import type { FastifyInstance } from 'fastify';
 import type { MaterialEntry } from '../../catalogues/material-entry.js';
 import { SCREENING_CAUTION } from '../../engine/caution.js';
@@ -53,13 +54,13 @@ function presentEntry(entry: MaterialEntry, units: OutputUnits) {
 
 export function materialRoutes(catalogues: LoadedCatalogues) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.get('/v1/materials', async (request) => {
+    app.get('/v1/materials', async (request, reply) => {
       const units = resolveOutputUnits(parseBody(unitsQuery, request.query).units, ['units']);
       const items = catalogues.materials.list().map((entry) => presentEntry(entry, units));
-      return { units: units.names, items, total: items.length, notices: [SCREENING_CAUTION] };
+      return sendJsonText(reply, finiteJson({ units: units.names, items, total: items.length, notices: [SCREENING_CAUTION] }));
     });
 
-    app.get('/v1/materials/:grade', async (request) => {
+    app.get('/v1/materials/:grade', async (request, reply) => {
       const { grade } = parseBody(gradeParams, request.params);
       const units = resolveOutputUnits(parseBody(unitsQuery, request.query).units, ['units']);
       const entry = catalogues.materials.find(grade);
@@ -67,7 +68,7 @@ export function materialRoutes(catalogues: LoadedCatalogues) {
         const nearest = catalogues.materials.nearest(grade, 5);
         throw new ProblemError('notFound', `No catalogue material has the grade "${grade}". Nearest: ${nearest.join(', ')}.`, [], { nearest });
       }
-      return { units: units.names, material: presentEntry(entry, units), notices: [SCREENING_CAUTION] };
+      return sendJsonText(reply, finiteJson({ units: units.names, material: presentEntry(entry, units), notices: [SCREENING_CAUTION] }));
     });
   };
 }

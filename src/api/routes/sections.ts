@@ -5,7 +5,7 @@ import type { TabulatedSectionValues } from '../../catalogues/section-entry.js';
 import { overallDepth, overallWidth } from '../../catalogues/overall-size.js';
 import { SCREENING_CAUTION } from '../../engine/caution.js';
 import { sectionProperties } from '../../engine/sections/section-from-dimensions.js';
-import { assertFinite } from '../finite-guard.js';
+import { finiteJson, sendJsonText } from '../answer-json.js';
 import type { LoadedCatalogues } from '../load-catalogues.js';
 import { QuantityReader } from '../normalise/quantity-reader.js';
 import { present, resolveOutputUnits } from '../output-units.js';
@@ -74,7 +74,7 @@ function bound(reader: QuantityReader, value: string | undefined, kind: Quantity
 
 export function sectionRoutes(catalogues: LoadedCatalogues) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.get('/v1/sections', async (request) => {
+    app.get('/v1/sections', async (request, reply) => {
       const query = parseBody(sectionListQuery, request.query);
       const reader = new QuantityReader();
       const maxDepth = bound(reader, query.maxDepth, 'length', 'maxDepth');
@@ -103,18 +103,21 @@ export function sectionRoutes(catalogues: LoadedCatalogues) {
           massPerLength: present(units, 'massPerLength', entry.massPerLength),
         };
       });
-      return {
-        units: units.names,
-        items,
-        total: page.total,
-        offset: page.offset,
-        limit: page.limit,
-        families: catalogues.sectionFamilies,
-        notices: [SCREENING_CAUTION],
-      };
+      return sendJsonText(
+        reply,
+        finiteJson({
+          units: units.names,
+          items,
+          total: page.total,
+          offset: page.offset,
+          limit: page.limit,
+          families: catalogues.sectionFamilies,
+          notices: [SCREENING_CAUTION],
+        }),
+      );
     });
 
-    app.get('/v1/sections/:designation', async (request) => {
+    app.get('/v1/sections/:designation', async (request, reply) => {
       const { designation } = parseBody(designationParams, request.params);
       const units = resolveOutputUnits(parseBody(unitsQuery, request.query).units, ['units']);
       const entry = catalogues.sections.find(designation);
@@ -126,14 +129,15 @@ export function sectionRoutes(catalogues: LoadedCatalogues) {
       for (const [key, value] of Object.entries(entry.tabulated) as [keyof TabulatedSectionValues, number | undefined][]) {
         if (value !== undefined) tabulated[key] = present(units, TABULATED_KINDS[key], value);
       }
-      const result = {
-        units: units.names,
-        section: presentSection({ dimensions: entry.dimensions, properties: sectionProperties(entry.dimensions), entry }, units),
-        tabulated,
-        notices: [SCREENING_CAUTION],
-      };
-      assertFinite(result);
-      return result;
+      return sendJsonText(
+        reply,
+        finiteJson({
+          units: units.names,
+          section: presentSection({ dimensions: entry.dimensions, properties: sectionProperties(entry.dimensions), entry }, units),
+          tabulated,
+          notices: [SCREENING_CAUTION],
+        }),
+      );
     });
   };
 }

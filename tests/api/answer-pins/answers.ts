@@ -12,7 +12,10 @@ export interface PinnedAnswer {
 }
 
 export async function answerOf(app: FastifyInstance, pinned: PinnedRequest): Promise<PinnedAnswer> {
-  const response = await app.inject({ method: 'POST', url: pinned.url, payload: JSON.stringify(pinned.body), headers: { 'content-type': 'application/json' } });
+  const response =
+    pinned.body === undefined
+      ? await app.inject({ method: 'GET', url: pinned.url })
+      : await app.inject({ method: 'POST', url: pinned.url, payload: JSON.stringify(pinned.body), headers: { 'content-type': 'application/json' } });
   return {
     status: response.statusCode,
     contentType: String(response.headers['content-type']),

@@ -1,7 +1,8 @@
 /**
  * The requests whose whole answers are pinned byte for byte (tests/api/answer-pins.test.ts): the typical
  * check, unit strings with US and per-kind output units, torsion on a tube, a batch with a bad item,
- * sizing, section properties, a problem answer, every route's example and every reference case.
+ * sizing, section properties, a problem answer, catalogue look-ups, every route's example and every
+ * reference case.
  * Invented members of a fictional shelving and work-platform maker.
  */
 
@@ -13,7 +14,8 @@ import { CATALOGUE_CHECK, PLATFORM_JOIST, TYPICAL_CHECK } from '../../../bench/t
 export interface PinnedRequest {
   readonly name: string;
   readonly url: string;
-  readonly body: unknown;
+  /** Sent as a POST; a request without a body is a GET. */
+  readonly body?: unknown;
 }
 
 /** Answers kept whole in files beside this one, so that a change shows as a readable diff. */
@@ -69,10 +71,11 @@ function referenceRequests(name: string): PinnedRequest[] {
     .map((file) => ({ name: `${name}/${file}`, url: '/v1/member-checks', body: (JSON.parse(readFileSync(folder + file, 'utf8')) as { request: unknown }).request }));
 }
 
-/** Answers pinned by their SHA-256: every route's example and every reference case. */
+/** Answers pinned by their SHA-256: every route's example, catalogue look-ups (a 404 among them) and every reference case. */
 export function digestRequests(): PinnedRequest[] {
   const examples = routeContracts()
     .filter((contract) => contract.exampleBody !== undefined)
     .map((contract) => ({ name: `example ${contract.operationId}`, url: contract.path, body: contract.exampleBody }));
-  return [...examples, ...referenceRequests('beam-diagrams'), ...referenceRequests('member-checks')];
+  const catalogue = ['/v1/sections?family=IPE&units=US', '/v1/sections/HEA%20200', '/v1/materials/S355?units=US', '/v1/sections/IPE%20999'].map((url) => ({ name: `GET ${url}`, url }));
+  return [...examples, ...catalogue, ...referenceRequests('beam-diagrams'), ...referenceRequests('member-checks')];
 }

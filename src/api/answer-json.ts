@@ -8,7 +8,7 @@
 import type { FastifyReply } from 'fastify';
 import { assertFinite } from './finite-guard.js';
 
-export const JSON_CONTENT_TYPE = 'application/json; charset=utf-8';
+const JSON_CONTENT_TYPE = 'application/json; charset=utf-8';
 
 /** The answer's JSON text; throws NonFiniteResultError (a 500) where a number is NaN or infinite. */
 export function finiteJson(answer: unknown): string {

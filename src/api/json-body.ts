@@ -18,7 +18,7 @@ declare module 'fastify' {
 }
 
 /** Larger bodies (batches) are not kept: they would double what a request holds and are not cached. */
-export const MAX_KEPT_BODY_TEXT = 64 * 1024;
+const MAX_KEPT_BODY_TEXT = 64 * 1024;
 
 export function registerJsonBody(app: FastifyInstance, answers: AnswerCache): void {
   const parse = app.getDefaultJsonParser('error', 'error');

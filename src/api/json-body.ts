@@ -9,15 +9,19 @@ import type { FastifyInstance } from 'fastify';
 import { answerKey, type AnswerCache } from './answer-cache.js';
 
 declare module 'fastify' {
+  interface FastifyContextConfig {
+    /** The route's answers are remembered by body (answer-cache.ts); only its bodies are kept and looked up. */
+    answerCache?: boolean;
+  }
   interface FastifyRequest {
-    /** The JSON body as received, when it is at most MAX_KEPT_BODY_TEXT characters; '' otherwise. */
+    /** The JSON body as received, on a route whose answers are remembered and at most MAX_KEPT_BODY_TEXT characters; '' otherwise. */
     bodyText: string;
     /** The remembered answer to this route and body, found when the body arrived; '' when there is none. */
     knownAnswer: string;
   }
 }
 
-/** Larger bodies (batches) are not kept: they would double what a request holds and are not cached. */
+/** Larger bodies are not kept: they would double what a request holds, and few are sent twice. */
 const MAX_KEPT_BODY_TEXT = 64 * 1024;
 
 export function registerJsonBody(app: FastifyInstance, answers: AnswerCache): void {
@@ -27,7 +31,7 @@ export function registerJsonBody(app: FastifyInstance, answers: AnswerCache): vo
   app.removeContentTypeParser('application/json');
   app.addContentTypeParser('application/json', { parseAs: 'string' }, (request, body, done) => {
     const text = body as string;
-    if (text.length <= MAX_KEPT_BODY_TEXT) {
+    if (request.routeOptions.config.answerCache === true && text.length <= MAX_KEPT_BODY_TEXT) {
       request.bodyText = text;
       const known = answers.enabled ? answers.get(answerKey(request.url, text)) : undefined;
       if (known !== undefined) {

@@ -91,6 +91,10 @@ describe('answers through the cache', () => {
       await send(app, '/v1/section-properties', { section: TYPICAL_CHECK.section });
       expect(other.statusCode).toBe(200);
       expect(cache.stats).toMatchObject({ entries: 2, hits: 2, misses: 2 });
+      // Batches are not remembered, so their bodies are neither kept nor looked up.
+      const batch = await send(app, '/v1/member-checks/batch', { items: [TYPICAL_CHECK] });
+      expect(batch.statusCode).toBe(200);
+      expect(cache.stats).toMatchObject({ entries: 2, hits: 2, misses: 2 });
     } finally {
       await app.close();
     }

@@ -25,7 +25,7 @@ export const memberCheckContract: RouteContract = {
 
 export function memberCheckRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-checks', (request, reply) => {
+    app.post('/v1/member-checks', { config: { answerCache: true } }, (request, reply) => {
       answerOnce(answers, request, reply, () => runMemberCheck(parseBody(memberCheckRequest, request.body), catalogues));
     });
   };

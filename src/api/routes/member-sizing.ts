@@ -25,7 +25,7 @@ export const memberSizingContract: RouteContract = {
 
 export function memberSizingRoutes(catalogues: LoadedCatalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/member-sizing', (request, reply) => {
+    app.post('/v1/member-sizing', { config: { answerCache: true } }, (request, reply) => {
       answerOnce(answers, request, reply, () => runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues));
     });
   };

@@ -30,7 +30,7 @@ export const sectionPropertiesContract: RouteContract = {
 
 export function sectionPropertiesRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
-    app.post('/v1/section-properties', (request, reply) => {
+    app.post('/v1/section-properties', { config: { answerCache: true } }, (request, reply) => {
       answerOnce(answers, request, reply, () => sectionPropertiesAnswer(request.body, catalogues));
     });
   };

@@ -14,22 +14,27 @@ import { EngineError } from '../engine/engine-error.js';
 import type { Material } from '../engine/materials/material.js';
 import { memberStiffness } from '../engine/member/member-stiffness.js';
 import { selfWeightLoad } from '../engine/member/self-weight.js';
+import { checkCombinations, type CombinationsOutcome } from '../engine/combinations/check-combinations.js';
+import type { LoadCaseModel } from '../engine/combinations/load-actions.js';
 import type { LoadModel, MemberModel } from '../engine/member/model.js';
 import type { SectionProperties } from '../engine/sections/section-properties.js';
 import type { MaterialLookup, SectionLookup } from './normalise/catalogue-lookup.js';
 import { normaliseBuckling, normaliseCriteria, normaliseLateralTorsional, normalisePins } from './normalise/check-options.js';
 import { resolveMaterial, type MaterialResolver } from './normalise/material.js';
+import { asksForCombinations, readCombinations, resolveCombinations, type NormalisedCombinations } from './normalise/load-combinations.js';
 import { normaliseLoads, normaliseMember, type NormalisedMember } from './normalise/member.js';
 import { QuantityReader, type Path } from './normalise/quantity-reader.js';
 import { resolveSection, type ResolvedSection } from './normalise/section.js';
 import { resolveOutputUnits, present, type OutputUnits } from './output-units.js';
 import { presentDiagrams, presentEquilibrium, presentExtremes, presentReactions } from './present/analysis.js';
 import { presentChecks } from './present/checks.js';
+import { presentLoadCombinations } from './present/load-combinations.js';
 import { presentMaterial } from './present/material.js';
 import { presentSection } from './present/section.js';
 import { jsonPointer, ProblemError } from './problems.js';
 import type { MemberCheckRequest } from './schemas/member-check-request.js';
 import type { MemberCheckResponse } from './schemas/member-check-response.js';
+import { SELF_WEIGHT_CASE } from './schemas/load-combinations-input.js';
 import { DEFAULT_SAMPLES } from './schemas/output-options.js';
 
 export interface Catalogues {
@@ -51,13 +56,16 @@ export interface NormalisedCheck {
   readonly buckling: BucklingInput;
   readonly lateralTorsional: LateralTorsionalInput;
   readonly pins: readonly PinInput[];
+  /** Load cases, moving loads and combinations; null for one load state given in `loads`. */
+  readonly combinations: NormalisedCombinations | null;
   readonly base: Path;
 }
 
 /** Everything but the section, converted and validated; throws one problem listing every bad field. */
 export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, catalogues: Catalogues, base: Path, reader = new QuantityReader()): NormalisedCheck {
   const member = normaliseMember(request.member, reader, [...base, 'member']);
-  const loads = normaliseLoads(request.loads, reader, [...base, 'loads']);
+  const loads = normaliseLoads(request.loads ?? [], reader, [...base, 'loads']);
+  const combinationsRead = asksForCombinations(request) ? readCombinations(request, reader, base) : null;
   const material = resolveMaterial(request.material, catalogues.materials, reader, [...base, 'material']);
   const criteria = normaliseCriteria(request.criteria, reader, [...base, 'criteria']);
   const buckling = normaliseBuckling(request.buckling, reader, [...base, 'buckling']);
@@ -65,10 +73,11 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
   const pins = normalisePins(request.member.supports, catalogues.materials, reader, [...base, 'member', 'supports']);
   const units = resolveOutputUnits(request.output?.units, [...base, 'output', 'units']);
   reader.finish();
+  const combinations = combinationsRead === null ? null : resolveCombinations(request, combinationsRead, member, base);
   return {
     member,
     loads,
-    loadLabels: request.loads.map((load) => load.label),
+    loadLabels: (request.loads ?? []).map((load) => load.label),
     supportLabels: request.member.supports.map((support) => support.label),
     selfWeight: request.selfWeight ?? false,
     samples: request.output?.samples ?? DEFAULT_SAMPLES,
@@ -78,6 +87,7 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
     buckling,
     lateralTorsional,
     pins,
+    combinations,
     base,
   };
 }
@@ -108,28 +118,61 @@ export interface CheckedMember {
   readonly model: MemberModel;
   readonly analysis: MemberAnalysis;
   readonly outcome: MemberCheckOutcome;
+  /** With load combinations: every combination; model, analysis and outcome above are then the governing one's and the overall. */
+  readonly combinations: CombinationsOutcome | null;
 }
 
 export function checkWithSection(check: NormalisedCheck, section: ResolvedSection): CheckedMember {
   const { material } = check.material.forThickness(section.properties.thickestElement);
   const model = memberModel(check, section.properties, material);
+  const checks = {
+    section: section.properties,
+    material,
+    criteria: check.criteria,
+    buckling: check.buckling,
+    lateralTorsional: check.lateralTorsional,
+    pins: check.pins,
+  };
   try {
+    if (check.combinations !== null) return checkCombinationsWithSection(check, check.combinations, section, material, model, checks);
     const analysis = analyseMember(model);
-    const outcome = checkMember({
-      analysis,
-      model,
-      section: section.properties,
-      material,
-      criteria: check.criteria,
-      buckling: check.buckling,
-      lateralTorsional: check.lateralTorsional,
-      pins: check.pins,
-    });
-    return { section, material, model, analysis, outcome };
+    const outcome = checkMember({ analysis, model, ...checks });
+    return { section, material, model, analysis, outcome, combinations: null };
   } catch (error) {
     if (error instanceof EngineError) throw problemFromEngineError(error, check.base);
     throw error;
   }
+}
+
+function checkCombinationsWithSection(
+  check: NormalisedCheck,
+  combinations: NormalisedCombinations,
+  section: ResolvedSection,
+  material: Material,
+  model: MemberModel,
+  checks: Omit<Parameters<typeof checkMember>[0], 'analysis' | 'model'>,
+): CheckedMember {
+  const cases: LoadCaseModel[] = check.selfWeight
+    ? [{ id: SELF_WEIGHT_CASE, category: 'permanent', loads: [selfWeightLoad(section.properties.area, material.density, check.member.length)] }, ...combinations.cases]
+    : [...combinations.cases];
+  const outcome = checkCombinations({
+    member: { length: model.length, supports: model.supports, hinges: model.hinges, stiffness: model.stiffness },
+    cases,
+    movingLoads: combinations.movingLoads,
+    combinations: combinations.combinations,
+    samples: check.samples,
+    checks,
+  });
+  const governing = outcome.results[outcome.governing] as CombinationsOutcome['results'][number];
+  const notices = [...outcome.outcome.notices, ...combinations.notices];
+  return {
+    section,
+    material,
+    model: governing.state.model,
+    analysis: governing.state.analysis,
+    outcome: { ...outcome.outcome, notices },
+    combinations: outcome,
+  };
 }
 
 export function presentCheck(check: NormalisedCheck, checked: CheckedMember): MemberCheckResponse {
@@ -147,7 +190,11 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
     diagrams: presentDiagrams(diagrams, units),
     extremes: presentExtremes(analysis, units),
     equilibrium: presentEquilibrium(analysis, units),
-    ...presentChecks(outcome, units),
+    ...presentChecks(outcome, units, checked.combinations?.worstChecks),
+    loadCombinations:
+      checked.combinations === null || check.combinations === null
+        ? undefined
+        : presentLoadCombinations(check.combinations, checked.combinations, check.supportLabels, units),
     notices: [...outcome.notices],
   };
 }

@@ -31,6 +31,7 @@ export const PROBLEMS = {
   notApplicable: problemType('not-applicable', 422, 'The request cannot be answered for this member'),
   noPassingCandidate: problemType('no-passing-candidate', 422, 'No candidate section passes'),
   tooManyItems: problemType('too-many-items', 413, 'The batch holds more items than the service accepts'),
+  tooMuchWork: problemType('too-much-work', 422, 'The request asks for more calculation than one request may'),
   internal: problemType('internal-error', 500, 'The service failed to answer'),
 } as const satisfies Record<string, ProblemType>;
 
@@ -87,4 +88,10 @@ export function jsonPointer(path: readonly (string | number)[]): string {
 export function invalidField(path: readonly (string | number)[], message: string): ProblemError {
   const pointer = jsonPointer(path);
   return new ProblemError('invalidInput', `${pointer || 'The body'}: ${message}`, [{ pointer, message }]);
+}
+
+/** The too-much-work problem: a limit of the service, named with its value, at the field that exceeds it. */
+export function tooMuchWork(path: readonly (string | number)[], message: string): ProblemError {
+  const pointer = jsonPointer(path);
+  return new ProblemError('tooMuchWork', `${pointer || 'The body'}: ${message}`, [{ pointer, message }]);
 }

@@ -4,7 +4,7 @@
  * leaves out: one shape per kind of object instead of spreads that make a new one each time.
  */
 
-import type { BucklingAxisResult, CheckQuantity, MemberCheckOutcome, StressExtreme } from '../../engine/checks/check-outcome.js';
+import type { BucklingAxisResult, CheckQuantity, FailureCheck, GoverningFailure, MemberCheckOutcome, StressExtreme } from '../../engine/checks/check-outcome.js';
 import { present, type OutputUnits } from '../output-units.js';
 
 /** The unit kind of each check quantity; it is also the quantity's name in the contract. */
@@ -43,37 +43,53 @@ function presentStress(extreme: StressExtreme, units: OutputUnits) {
   };
 }
 
-export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits) {
-  const ltb = outcome.lateralTorsionalBuckling;
-  const { stresses, criteria, governing } = outcome;
-  return {
-    checks: outcome.checks.map((check) => {
-      const kind = CHECK_KINDS[check.quantity];
-      return {
-        mode: check.mode,
-        quantity: kind,
-        demand: present(units, kind, check.demand),
-        capacity: present(units, kind, check.capacity),
-        safetyFactor: check.safetyFactor ?? undefined,
-        requiredSafetyFactor: check.requiredSafetyFactor,
-        utilization: check.utilization,
-        passes: check.passes,
-        position: optionalLength(units, check.position),
-        location: check.location ?? undefined,
-        basis: check.basis,
+/** Which combination and train position a check comes from, when the loads come in combinations. */
+export interface CheckOrigin {
+  readonly combination: string;
+  readonly loadPosition: number | null;
+}
+
+export function presentCheckList(checks: readonly FailureCheck[], units: OutputUnits, origins?: readonly CheckOrigin[]) {
+  return checks.map((check, i) => {
+    const kind = CHECK_KINDS[check.quantity];
+    const origin = origins?.[i];
+    return {
+      mode: check.mode,
+      quantity: kind,
+      demand: present(units, kind, check.demand),
+      capacity: present(units, kind, check.capacity),
+      safetyFactor: check.safetyFactor ?? undefined,
+      requiredSafetyFactor: check.requiredSafetyFactor,
+      utilization: check.utilization,
+      passes: check.passes,
+      position: optionalLength(units, check.position),
+      location: check.location ?? undefined,
+      basis: check.basis,
+      combination: origin?.combination,
+      loadPosition: optionalLength(units, origin?.loadPosition),
+    };
+  });
+}
+
+export function presentGoverning(governing: GoverningFailure | null, units: OutputUnits) {
+  return governing === null
+    ? undefined
+    : {
+        mode: governing.mode,
+        utilization: governing.utilization,
+        safetyFactor: governing.safetyFactor,
+        position: optionalLength(units, governing.position),
+        location: governing.location ?? undefined,
       };
-    }),
+}
+
+export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits, origins?: readonly CheckOrigin[]) {
+  const ltb = outcome.lateralTorsionalBuckling;
+  const { stresses, criteria } = outcome;
+  return {
+    checks: presentCheckList(outcome.checks, units, origins),
     notApplicable: outcome.notApplicable.map(({ mode, reason }) => ({ mode, reason })),
-    governing:
-      governing === null
-        ? undefined
-        : {
-            mode: governing.mode,
-            utilization: governing.utilization,
-            safetyFactor: governing.safetyFactor,
-            position: optionalLength(units, governing.position),
-            location: governing.location ?? undefined,
-          },
+    governing: presentGoverning(outcome.governing, units),
     verdict: outcome.verdict,
     buckling: { governing: presentAxis(outcome.buckling.governing, units), axes: outcome.buckling.axes.map((axis) => presentAxis(axis, units)) },
     lateralTorsionalBuckling:

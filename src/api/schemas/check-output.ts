@@ -19,6 +19,8 @@ export const failureCheckOutput = z
     position: presentedQuantity('length', 'Where along the member the demand peaks; absent for a member-wide check or no demand.').optional(),
     location: z.string().optional().openapi({ description: 'Where on the section, or which part of the member.' }),
     basis: z.string().openapi({ description: 'The formula and its source, in one line.' }),
+    combination: z.string().optional().openapi({ description: 'With load combinations, in the top-level checks: the combination in which this check is at its worst.' }),
+    loadPosition: presentedQuantity('length', "With a moving load: where the train's reference point stood when this check was at its worst.").optional(),
   })
   .openapi('FailureCheck');
 
@@ -42,19 +44,21 @@ const stressExtreme = z.object({
   location: z.string().optional().openapi({ description: 'Where on the section.' }),
 });
 
+export const governingOutput = z
+  .object({
+    mode,
+    utilization: z.number().openapi({ description: 'Its utilization: demand x required factor / capacity.' }),
+    safetyFactor: z.number().openapi({ description: 'Its safety factor: capacity / demand.' }),
+    position: presentedQuantity('length', 'Where it governs.').optional(),
+    location: z.string().optional().openapi({ description: 'Where on the section, or which part of the member.' }),
+  })
+  .optional()
+  .openapi({ description: 'The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand.' });
+
 export const checksOutput = {
   checks: z.array(failureCheckOutput).openapi({ description: 'Every applicable failure check.' }),
   notApplicable: z.array(z.object({ mode, reason: z.string().openapi({ description: 'Why the mode does not apply to this member.' }) })).openapi({ description: 'Modes not checked for this member, and why.' }),
-  governing: z
-    .object({
-      mode,
-      utilization: z.number().openapi({ description: 'Its utilization: demand x required factor / capacity.' }),
-      safetyFactor: z.number().openapi({ description: 'Its safety factor: capacity / demand.' }),
-      position: presentedQuantity('length', 'Where it governs.').optional(),
-      location: z.string().optional().openapi({ description: 'Where on the section, or which part of the member.' }),
-    })
-    .optional()
-    .openapi({ description: 'The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand.' }),
+  governing: governingOutput,
   verdict: z.enum(['pass', 'fail']).openapi({ description: 'pass when every check passes.' }),
   buckling: z
     .object({ governing: bucklingAxis, axes: z.array(bucklingAxis).openapi({ description: 'Every principal axis checked.' }) })

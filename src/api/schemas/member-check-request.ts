@@ -2,6 +2,7 @@
 
 import { bucklingInput, criteriaInput, lateralTorsionalInput } from './check-options.js';
 import { materialInput } from './material-input.js';
+import { loadCombinationFields } from './load-combinations-input.js';
 import { loadsInput, memberInput } from './member-input.js';
 import { outputOptions } from './output-options.js';
 import { sectionInput } from './section-input.js';
@@ -31,7 +32,10 @@ export const memberCheckRequest = z
     member: memberInput,
     section: sectionInput,
     material: materialInput,
-    loads: loadsInput.openapi({ description: 'Point and distributed loads; an empty list is allowed (with selfWeight, or to see the section and material).' }),
+    loads: loadsInput
+      .optional()
+      .openapi({ description: 'Point and distributed loads, one load state; an empty list is allowed (with selfWeight, or to see the section and material). Default empty. Must be empty when the loads come in loadCases or movingLoads.' }),
+    ...loadCombinationFields,
     selfWeight: z
       .boolean()
       .optional()

@@ -3,6 +3,7 @@
 import { QUANTITY_KINDS, type QuantityKind } from '../quantities.js';
 import { diagramsOutput, equilibriumOutput, extremesOutput, reactionOutput } from './analysis-output.js';
 import { checksOutput } from './check-output.js';
+import { loadCombinationsOutput } from './load-combinations-output.js';
 import { materialOutput } from './material-output.js';
 import { resolvedSectionOutput } from './section-output.js';
 import { z } from './zod.js';
@@ -38,6 +39,7 @@ export const memberCheckResponse = z
     extremes: extremesOutput,
     equilibrium: equilibriumOutput,
     ...checksOutput,
+    loadCombinations: loadCombinationsOutput,
     notices,
   })
   .openapi('MemberCheckResponse');

@@ -1,0 +1,411 @@
+/**
+ * Every combination of a member's actions analysed and checked, and the one that governs.
+ *
+ * A combination without a moving load is one load state: the load cases times their factors
+ * (superposition; the member is linear elastic). A combination with a moving load is a family of load
+ * states, one for each position of the train: the search visits every position of trainPositions(), then
+ * refines, by Brent's method, the neighbourhood of the two best positions for the governing utilization
+ * and for the largest and smallest value of every diagram. Between the nodes a response is a polynomial
+ * of low degree in the load position, so the refined extremes are exact to within 1e-8 of the member
+ * length in position (checked against the closed-form absolute maximum moment of a simple span under
+ * two moving loads, AISC Steel Construction Manual, beam diagrams, cases 43 and 44).
+ */
+
+import { analyseMember } from '../analysis/analyse-member.js';
+import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis, type SupportReaction } from '../analysis/result.js';
+import { ZERO_TOLERANCE, withoutNegativeZero } from '../analysis/tolerances.js';
+import type { MemberCheckInput } from '../checks/check-input.js';
+import { checkMember } from '../checks/check-member.js';
+import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck } from '../checks/check-outcome.js';
+import type { FailureMode } from '../checks/failure-mode.js';
+import { governingFailure } from '../checks/governing.js';
+import { EngineError } from '../engine-error.js';
+import type { LoadModel, MemberModel } from '../member/model.js';
+import { validateMemberModel } from '../member/validate-model.js';
+import { brentMaximum } from './brent-maximum.js';
+import { combinedStaticLoads, trainLoads } from './combined-loads.js';
+import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type DiagramEnvelope, type EnvelopePositions } from './diagram-envelope.js';
+import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
+import { trainPositions } from './train-positions.js';
+
+export interface CombinationsInput {
+  readonly member: Omit<MemberModel, 'loads'>;
+  readonly cases: readonly LoadCaseModel[];
+  readonly movingLoads: readonly MovingLoadModel[];
+  readonly combinations: readonly CombinationModel[];
+  /** Evenly spaced envelope points (the fixed nodes are added). */
+  readonly samples: number;
+  readonly checks: Omit<MemberCheckInput, 'analysis' | 'model'>;
+}
+
+/** One analysed and checked load state. */
+export interface LoadState {
+  readonly model: MemberModel;
+  readonly analysis: MemberAnalysis;
+  /** The checks of the combination's purpose only. */
+  readonly outcome: MemberCheckOutcome;
+}
+
+/** An extreme of a diagram over the member and every train position: its value, where on the member, and where the train stood. */
+export interface MovingExtreme {
+  readonly value: number;
+  readonly position: number;
+  readonly loadPosition: number;
+}
+
+export const REACTION_COMPONENTS = ['fx', 'fy', 'fz', 'mx', 'my', 'mz'] as const;
+export type ReactionComponent = (typeof REACTION_COMPONENTS)[number];
+
+export interface ReactionBound {
+  readonly value: number;
+  readonly loadPosition: number;
+}
+
+export interface ReactionEnvelope {
+  readonly position: number;
+  readonly max: Readonly<Record<ReactionComponent, ReactionBound>>;
+  readonly min: Readonly<Record<ReactionComponent, ReactionBound>>;
+}
+
+export interface MovingLoadResult {
+  readonly id: string;
+  readonly factor: number;
+  /** The train positions visited on the grid and at the nodes (refinements not counted). */
+  readonly positionsSearched: number;
+  readonly extremes: Readonly<Record<DiagramField, { readonly max: MovingExtreme; readonly min: MovingExtreme }>>;
+  readonly reactions: readonly ReactionEnvelope[];
+}
+
+export interface CombinationResult {
+  readonly combination: CombinationModel;
+  /** At the governing train position for a moving load. */
+  readonly state: LoadState;
+  /** Where the train's reference point stands in `state`; null without a moving load. */
+  readonly loadPosition: number | null;
+  readonly movingLoad: MovingLoadResult | null;
+  /** Largest and smallest value at the envelope positions over every state of the combination. */
+  readonly envelope: DiagramEnvelope;
+}
+
+/** A check at its worst over every combination and train position, and where that was. */
+export interface WorstCheck {
+  readonly check: FailureCheck;
+  readonly combination: string;
+  readonly loadPosition: number | null;
+}
+
+export interface CombinationsOutcome {
+  readonly results: readonly CombinationResult[];
+  /** Index into results of the combination that holds the governing check. */
+  readonly governing: number;
+  readonly worstChecks: readonly WorstCheck[];
+  /** Every check at its worst, the governing one, the verdict; buckling, stresses and criteria of the governing combination. */
+  readonly outcome: MemberCheckOutcome;
+  readonly envelopes: Readonly<Record<CombinationPurpose, DiagramEnvelope | null>>;
+  readonly envelopePositions: EnvelopePositions;
+}
+
+const SERVICEABILITY_MODES: readonly FailureMode[] = ['deflection', 'twist'];
+/** Modes checked separately per span, segment or support: their location is part of what they are. */
+const LOCATED_MODES: readonly FailureMode[] = ['deflection', 'lateral-torsional-buckling', 'pin-shear', 'pin-bearing'];
+/** Position tolerance of the refinement, relative to the member length. */
+const REFINEMENT_TOLERANCE = 1e-8;
+/** The refinement looks near this many of the best grid positions. */
+const PEAKS_REFINED = 2;
+
+function servesPurpose(mode: FailureMode, purpose: CombinationPurpose): boolean {
+  return SERVICEABILITY_MODES.includes(mode) === (purpose === 'serviceability');
+}
+
+/** The outcome with only the checks of the purpose, its governing check and verdict taken again. */
+function outcomeForPurpose(outcome: MemberCheckOutcome, purpose: CombinationPurpose): MemberCheckOutcome {
+  const checks = outcome.checks.filter((check) => servesPurpose(check.mode, purpose));
+  return {
+    ...outcome,
+    checks,
+    notApplicable: outcome.notApplicable.filter((reason) => servesPurpose(reason.mode, purpose)),
+    governing: governingFailure(checks),
+    verdict: checks.every((check) => check.passes) ? 'pass' : 'fail',
+  };
+}
+
+/** Each load case's loads must lie on the member: checked case by case so the pointer names the case. */
+function validateCases(member: Omit<MemberModel, 'loads'>, cases: readonly LoadCaseModel[]): void {
+  cases.forEach((loadCase, i) => {
+    try {
+      validateMemberModel({ ...member, loads: loadCase.loads });
+    } catch (error) {
+      if (error instanceof EngineError && error.path[0] === 'loads') {
+        throw new EngineError(error.kind, error.message.replace(/^(The (start|end) of )?[Ll]oad (\d+)/, (_, prefix: string | undefined, _part, n: string) => `${prefix ?? ''}${prefix ? 'l' : 'L'}oad ${n} of load case "${loadCase.id}"`), ['loadCases', i, ...error.path], error.details);
+      }
+      throw error;
+    }
+  });
+}
+
+function fixedNodesOf(member: Omit<MemberModel, 'loads'>, cases: readonly LoadCaseModel[]): number[] {
+  const nodes = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
+  for (const loadCase of cases) {
+    for (const load of loadCase.loads) {
+      if (load.kind === 'point') nodes.push(load.position);
+      else nodes.push(load.from, load.to);
+    }
+  }
+  return nodes;
+}
+
+/** The identity of a check across load states: its mode and formula, or for per-span checks its mode and where it lies. */
+function checkKey(check: FailureCheck): string {
+  if (LOCATED_MODES.includes(check.mode)) return `${check.mode}|${check.location ?? ''}`;
+  // The formula without the numbers it quotes (a moment-gradient factor, a slenderness) that change with the loads.
+  return `${check.mode}|${check.basis.replace(/\d[\d.]*(e[-+]?\d+)?/gi, '#')}`;
+}
+
+class WorstChecks {
+  private readonly byKey = new Map<string, WorstCheck>();
+
+  note(outcome: MemberCheckOutcome, combination: string, loadPosition: number | null): void {
+    for (const check of outcome.checks) {
+      const key = checkKey(check);
+      const known = this.byKey.get(key);
+      if (known === undefined || check.utilization > known.check.utilization) this.byKey.set(key, { check, combination, loadPosition });
+    }
+  }
+
+  all(): WorstCheck[] {
+    return [...this.byKey.values()];
+  }
+}
+
+/** Indices of the best local maxima of `values`, best first. */
+function peakIndices(values: readonly number[], count: number): number[] {
+  const peaks: number[] = [];
+  for (let k = 0; k < values.length; k++) {
+    const value = values[k] as number;
+    if ((k === 0 || value >= (values[k - 1] as number)) && (k === values.length - 1 || value >= (values[k + 1] as number))) peaks.push(k);
+  }
+  return peaks.sort((a, b) => (values[b] as number) - (values[a] as number) || a - b).slice(0, count);
+}
+
+/**
+ * The largest value of f over the positions, refined near the best grid peaks: returns the position and
+ * value, the grid's own when no refinement beats it.
+ */
+function refinedMaximum(positions: readonly number[], values: readonly number[], f: (p: number) => number, tolerance: number): { position: number; value: number } {
+  let best = { position: positions[0] as number, value: values[0] as number };
+  for (let k = 1; k < values.length; k++) if ((values[k] as number) > best.value) best = { position: positions[k] as number, value: values[k] as number };
+  if (positions.length < 2) return best;
+  for (const k of peakIndices(values, PEAKS_REFINED)) {
+    const lo = positions[Math.max(0, k - 1)] as number;
+    const hi = positions[Math.min(positions.length - 1, k + 1)] as number;
+    const found = brentMaximum(f, lo, hi, tolerance);
+    if (found.value > best.value) best = { position: found.x, value: found.value };
+  }
+  return best;
+}
+
+function evaluateState(member: Omit<MemberModel, 'loads'>, loads: readonly LoadModel[], input: CombinationsInput, purpose: CombinationPurpose): LoadState {
+  const model: MemberModel = { ...member, loads };
+  const analysis = analyseMember(model);
+  const outcome = outcomeForPurpose(checkMember({ ...input.checks, analysis, model }), purpose);
+  return { model, analysis, outcome };
+}
+
+function movingLoadOf(combination: CombinationModel, index: number, movingLoads: readonly MovingLoadModel[]): { train: MovingLoadModel; factor: number } | null {
+  const named = movingLoads.filter((train) => (combination.factors.get(train.id) ?? 0) !== 0);
+  if (named.length > 1) {
+    throw new EngineError('not-applicable', `Combination "${combination.id}" moves ${named.length} trains; a combination moves one (give trains that travel together as one moving load).`, ['combinations', index, 'factors']);
+  }
+  const train = named[0];
+  return train === undefined ? null : { train, factor: combination.factors.get(train.id) as number };
+}
+
+interface ReactionBounds {
+  readonly max: Record<ReactionComponent, ReactionBound>;
+  readonly min: Record<ReactionComponent, ReactionBound>;
+}
+
+function reactionBounds(reactions: readonly SupportReaction[]): ReactionBounds[] {
+  return reactions.map(() => {
+    const max = {} as Record<ReactionComponent, ReactionBound>;
+    const min = {} as Record<ReactionComponent, ReactionBound>;
+    for (const component of REACTION_COMPONENTS) {
+      max[component] = { value: -Infinity, loadPosition: 0 };
+      min[component] = { value: Infinity, loadPosition: 0 };
+    }
+    return { max, min };
+  });
+}
+
+function checkMovingCombination(
+  input: CombinationsInput,
+  combination: CombinationModel,
+  moving: { train: MovingLoadModel; factor: number },
+  fixedNodes: readonly number[],
+  positions: EnvelopePositions,
+  worst: WorstChecks,
+): CombinationResult {
+  const { member } = input;
+  const { length } = member;
+  const staticLoads = combinedStaticLoads(input.cases, combination);
+  const loadsAt = (p: number): LoadModel[] => [...staticLoads, ...trainLoads(moving.train, p, moving.factor, length)];
+  const stateAt = (p: number): LoadState => {
+    const state = evaluateState(member, loadsAt(p), input, combination.purpose);
+    worst.note(state.outcome, combination.id, p);
+    return state;
+  };
+  const trainAt = trainPositions(moving.train, fixedNodes, length);
+  const envelope = emptyEnvelope(positions);
+  const utilization: number[] = [];
+  const fieldMax = Object.fromEntries(DIAGRAM_FIELDS.map((field) => [field, [] as number[]])) as Record<DiagramField, number[]>;
+  const fieldMin = Object.fromEntries(DIAGRAM_FIELDS.map((field) => [field, [] as number[]])) as Record<DiagramField, number[]>;
+  let bounds: ReactionBounds[] | null = null;
+  for (const p of trainAt) {
+    const state = stateAt(p);
+    utilization.push(state.outcome.governing?.utilization ?? 0);
+    widenEnvelope(envelope, positions, state.analysis);
+    for (const field of DIAGRAM_FIELDS) {
+      fieldMax[field].push(state.analysis.extremes[field].max.value);
+      fieldMin[field].push(-state.analysis.extremes[field].min.value);
+    }
+    bounds ??= reactionBounds(state.analysis.reactions);
+    state.analysis.reactions.forEach((reaction, i) => {
+      const bound = (bounds as ReactionBounds[])[i] as ReactionBounds;
+      for (const component of REACTION_COMPONENTS) {
+        const value = reaction[component];
+        if (value > bound.max[component].value) bound.max[component] = { value, loadPosition: p };
+        if (value < bound.min[component].value) bound.min[component] = { value, loadPosition: p };
+      }
+    });
+  }
+  const tolerance = REFINEMENT_TOLERANCE * length;
+  const governing = refinedMaximum(trainAt, utilization, (p) => stateAt(p).outcome.governing?.utilization ?? 0, tolerance);
+  const state = stateAt(governing.position);
+  widenEnvelope(envelope, positions, state.analysis);
+
+  const extremes = {} as Record<DiagramField, { max: MovingExtreme; min: MovingExtreme }>;
+  for (const field of DIAGRAM_FIELDS) {
+    const identicallyZero = fieldMax[field].every((value) => value === 0) && fieldMin[field].every((value) => value === 0);
+    const extremeAt = (p: number, side: 'max' | 'min'): MovingExtreme => {
+      const extreme = analyseMember({ ...member, loads: loadsAt(p) }).extremes[field][side];
+      return { value: extreme.value, position: extreme.position, loadPosition: p };
+    };
+    const refine = (side: 'max' | 'min', values: readonly number[]): MovingExtreme => {
+      const sign = side === 'max' ? 1 : -1;
+      const best = identicallyZero ? { position: trainAt[0] as number, value: 0 } : refinedMaximum(trainAt, values, (p) => sign * extremeAt(p, side).value, tolerance);
+      return extremeAt(best.position, side);
+    };
+    extremes[field] = { max: refine('max', fieldMax[field]), min: refine('min', fieldMin[field]) };
+  }
+  const reactions = state.analysis.reactions.map((reaction, i) => ({ position: reaction.position, ...((bounds as ReactionBounds[])[i] as ReactionBounds) }));
+  return {
+    combination,
+    state,
+    loadPosition: governing.position,
+    movingLoad: { id: moving.train.id, factor: moving.factor, positionsSearched: trainAt.length, extremes, reactions },
+    envelope,
+  };
+}
+
+/** Values within ZERO_TOLERANCE of a field's largest magnitude become 0, and no value is -0 (as in the diagrams). */
+function roundEnvelope(envelope: DiagramEnvelope): DiagramEnvelope {
+  for (const field of DIAGRAM_FIELDS) {
+    let scale = 0;
+    for (const value of envelope.max[field]) scale = Math.max(scale, Math.abs(value));
+    for (const value of envelope.min[field]) scale = Math.max(scale, Math.abs(value));
+    const round = (value: number) => (Math.abs(value) <= ZERO_TOLERANCE * scale ? 0 : withoutNegativeZero(value));
+    envelope.max[field].forEach((value, k, column) => (column[k] = round(value)));
+    envelope.min[field].forEach((value, k, column) => (column[k] = round(value)));
+  }
+  return envelope;
+}
+
+function copyEnvelope(envelope: DiagramEnvelope): DiagramEnvelope {
+  const max = {} as Record<DiagramField, number[]>;
+  const min = {} as Record<DiagramField, number[]>;
+  for (const field of DIAGRAM_FIELDS) {
+    max[field] = [...envelope.max[field]];
+    min[field] = [...envelope.min[field]];
+  }
+  return { x: envelope.x, max, min };
+}
+
+function aggregateOutcome(results: readonly CombinationResult[], worstChecks: readonly WorstCheck[]): { outcome: MemberCheckOutcome; governing: number } {
+  const checks = worstChecks.map((entry) => entry.check);
+  const governingCheck = governingFailure(checks);
+  let governing = 0;
+  if (governingCheck !== null) {
+    // governingFailure picks among checks within a tie by mode; find the entry it picked.
+    const entry = worstChecks.find(
+      (candidate) =>
+        candidate.check.mode === governingCheck.mode &&
+        candidate.check.utilization === governingCheck.utilization &&
+        candidate.check.position === governingCheck.position &&
+        candidate.check.location === governingCheck.location,
+    );
+    governing = Math.max(0, results.findIndex((result) => result.combination.id === entry?.combination));
+  }
+  const checked = new Set(checks.map((check) => check.mode));
+  const notApplicable: NotApplicableCheck[] = [];
+  const seenModes = new Set<FailureMode>();
+  const notices: string[] = [];
+  const seenNotices = new Set<string>();
+  for (const result of results) {
+    for (const reason of result.state.outcome.notApplicable) {
+      if (checked.has(reason.mode) || seenModes.has(reason.mode)) continue;
+      seenModes.add(reason.mode);
+      notApplicable.push(reason);
+    }
+    for (const notice of result.state.outcome.notices) {
+      if (seenNotices.has(notice)) continue;
+      seenNotices.add(notice);
+      notices.push(notice);
+    }
+  }
+  const base = (results[governing] as CombinationResult).state.outcome;
+  return {
+    governing,
+    outcome: {
+      checks,
+      notApplicable,
+      governing: governingCheck,
+      verdict: checks.every((check) => check.passes) ? 'pass' : 'fail',
+      buckling: base.buckling,
+      lateralTorsionalBuckling: base.lateralTorsionalBuckling,
+      stresses: base.stresses,
+      criteria: base.criteria,
+      notices,
+    },
+  };
+}
+
+export function checkCombinations(input: CombinationsInput): CombinationsOutcome {
+  const { member, cases, combinations } = input;
+  if (combinations.length === 0) throw new EngineError('not-applicable', 'There is no combination to check.', ['combinations']);
+  validateCases(member, cases);
+  const fixedNodes = fixedNodesOf(member, cases);
+  const positions = envelopePositions(member.length, input.samples, fixedNodes);
+  const worst = new WorstChecks();
+  const results = combinations.map((combination, index): CombinationResult => {
+    const moving = movingLoadOf(combination, index, input.movingLoads);
+    if (moving !== null) return checkMovingCombination(input, combination, moving, fixedNodes, positions, worst);
+    const state = evaluateState(member, combinedStaticLoads(cases, combination), input, combination.purpose);
+    worst.note(state.outcome, combination.id, null);
+    const envelope = emptyEnvelope(positions);
+    widenEnvelope(envelope, positions, state.analysis);
+    return { combination, state, loadPosition: null, movingLoad: null, envelope };
+  });
+  const envelopes: Record<CombinationPurpose, DiagramEnvelope | null> = { strength: null, serviceability: null };
+  for (const result of results) {
+    const purpose = result.combination.purpose;
+    const known = envelopes[purpose];
+    if (known === null) envelopes[purpose] = copyEnvelope(result.envelope);
+    else mergeEnvelope(known, result.envelope);
+    roundEnvelope(result.envelope);
+  }
+  for (const envelope of Object.values(envelopes)) if (envelope !== null) roundEnvelope(envelope);
+  const worstChecks = worst.all();
+  const { outcome, governing } = aggregateOutcome(results, worstChecks);
+  return { results, governing, worstChecks, outcome, envelopes, envelopePositions: positions };
+}
+

@@ -1,0 +1,36 @@
+/**
+ * Where a moving load's reference point is placed in the search: an even grid from `from` to `to` no
+ * coarser than `step`, plus every position that puts an axle on a fixed node (support, hinge, load-case
+ * load point or end). On a statically determinate member each influence line is straight between
+ * those nodes, so reactions and the extremes reached under an axle at a node are exact there; elsewhere
+ * the search is refined by Brent's method (see check-combinations.ts).
+ */
+
+import { POSITION_TOLERANCE } from '../analysis/tolerances.js';
+import type { MovingLoadModel } from './load-actions.js';
+
+/** The number of grid intervals the range and step make: at least 1 unless the range is a single point. */
+export function gridIntervals(train: Pick<MovingLoadModel, 'from' | 'to' | 'step'>): number {
+  const span = train.to - train.from;
+  if (!(span > 0)) return 0;
+  return Math.max(1, Math.ceil(span / train.step - 1e-9));
+}
+
+export function trainPositions(train: MovingLoadModel, fixedNodes: readonly number[], length: number): number[] {
+  const tolerance = POSITION_TOLERANCE * length;
+  const intervals = gridIntervals(train);
+  const positions: number[] = [];
+  for (let k = 0; k <= intervals; k++) positions.push(k === intervals ? train.to : train.from + ((train.to - train.from) * k) / Math.max(1, intervals));
+  for (const axle of train.axles) {
+    for (const node of fixedNodes) {
+      const position = node - axle.offset;
+      if (position >= train.from - tolerance && position <= train.to + tolerance) positions.push(Math.min(train.to, Math.max(train.from, position)));
+    }
+  }
+  positions.sort((a, b) => a - b);
+  const distinct: number[] = [];
+  for (const position of positions) {
+    if (distinct.length === 0 || position - (distinct[distinct.length - 1] as number) > tolerance) distinct.push(position);
+  }
+  return distinct;
+}

@@ -31,7 +31,7 @@ import { presentChecks } from './present/checks.js';
 import { presentLoadCombinations } from './present/load-combinations.js';
 import { presentMaterial } from './present/material.js';
 import { presentSection } from './present/section.js';
-import { jsonPointer, ProblemError } from './problems.js';
+import { jsonPointer, ProblemError, tooMuchWork } from './problems.js';
 import type { MemberCheckRequest } from './schemas/member-check-request.js';
 import type { MemberCheckResponse } from './schemas/member-check-response.js';
 import { SELF_WEIGHT_CASE } from './schemas/load-combinations-input.js';
@@ -199,15 +199,35 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
   };
 }
 
+/** Load states one check analyses: one, or one per combination and train position searched. */
+export function loadStatesOf(check: NormalisedCheck): number {
+  return check.combinations?.loadStates ?? 1;
+}
+
+/** Load states several checks share (a batch): each check takes its own from what is left, or is refused. */
+export interface WorkBudget {
+  remaining: number;
+  readonly limit: number;
+}
+
+function spend(budget: WorkBudget, check: NormalisedCheck): void {
+  const states = loadStatesOf(check);
+  if (states > budget.remaining) {
+    throw tooMuchWork([...check.base, 'combinations'], `${states} load states (combinations x train positions), but only ${budget.remaining} of the batch's ${budget.limit} are left`);
+  }
+  budget.remaining -= states;
+}
+
 /** A request normalised and checked, before presenting: what the engine made of it. */
-export function checkRequest(request: MemberCheckRequest, catalogues: Catalogues, base: Path = []): { check: NormalisedCheck; checked: CheckedMember } {
+export function checkRequest(request: MemberCheckRequest, catalogues: Catalogues, base: Path = [], budget?: WorkBudget): { check: NormalisedCheck; checked: CheckedMember } {
   const reader = new QuantityReader();
   const section = resolveSection(request.section, catalogues.sections, reader, [...base, 'section']);
   const check = normaliseCheck(request, catalogues, base, reader);
+  if (budget !== undefined) spend(budget, check);
   return { check, checked: checkWithSection(check, section()) };
 }
 
-export function runMemberCheck(request: MemberCheckRequest, catalogues: Catalogues, base: Path = []): MemberCheckResponse {
-  const { check, checked } = checkRequest(request, catalogues, base);
+export function runMemberCheck(request: MemberCheckRequest, catalogues: Catalogues, base: Path = [], budget?: WorkBudget): MemberCheckResponse {
+  const { check, checked } = checkRequest(request, catalogues, base, budget);
   return presentCheck(check, checked);
 }

@@ -9,7 +9,7 @@ import { SCREENING_CAUTION } from '../engine/caution.js';
 import type { SectionDimensions } from '../engine/sections/dimensions.js';
 import { rankCandidates, type SizingObjective } from '../engine/sizing/rank-candidates.js';
 import type { LoadedCatalogues } from './load-catalogues.js';
-import { checkWithSection, normaliseCheck, presentCheck, type CheckedMember, type NormalisedCheck } from './member-check.js';
+import { checkWithSection, loadStatesOf, normaliseCheck, presentCheck, type CheckedMember, type NormalisedCheck } from './member-check.js';
 import { QuantityReader } from './normalise/quantity-reader.js';
 import { propertiesOf, shapeDimensions, unknownDesignation } from './normalise/section.js';
 import { present } from './output-units.js';
@@ -90,10 +90,13 @@ export function runMemberSizing(request: MemberSizingRequest, catalogues: Loaded
     throw invalidField(['candidates'], `${all.length} candidates; at most ${MAX_CANDIDATES} are checked in one request`);
   }
   const { density } = check.material;
-  // Each candidate is a whole analysis and check: bound the work one request may ask for.
-  const work = all.length * (check.loads.length + check.member.supports.length + check.member.hinges.length + 1);
+  // Each candidate is a whole analysis and check per load state: bound the work one request may ask for.
+  const loads = check.combinations === null ? check.loads.length : check.combinations.cases.reduce((sum, loadCase) => sum + loadCase.loads.length, 0);
+  const states = loadStatesOf(check);
+  const work = all.length * states * (loads + check.member.supports.length + check.member.hinges.length + 1);
   if (work > MAX_SIZING_WORK) {
-    throw invalidField(['candidates'], `${all.length} candidates x ${check.loads.length} loads is more work than one request may ask (candidates x (loads + supports + hinges + 1) <= ${MAX_SIZING_WORK}); narrow the candidates or the limits`);
+    const statesText = states === 1 ? '' : ` x ${states} load states`;
+    throw invalidField(['candidates'], `${all.length} candidates${statesText} x ${loads} loads is more work than one request may ask (candidates x load states x (loads + supports + hinges + 1) <= ${MAX_SIZING_WORK}); narrow the candidates or the limits`);
   }
   const excluded: { designation: string; reason: string }[] = [];
   const kept = all.filter((candidate) => {

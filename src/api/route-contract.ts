@@ -23,6 +23,8 @@ export interface RouteContract {
   readonly problems: readonly ProblemName[];
   /** A request that the tests send and that must be answered 200. */
   readonly exampleBody?: unknown;
+  /** Further requests, each named and answered 200, published beside exampleBody and sent by the tests. */
+  readonly moreExamples?: Readonly<Record<string, { readonly summary: string; readonly value: unknown }>>;
 }
 
 /** "/v1/sections/{designation}" -> "/v1/sections/:designation" */

@@ -169,7 +169,10 @@ export function resolveCombinations(request: CombinationFields, read: ReadCombin
     if (actions.some((action) => action.category === 'accidental')) notices.push('Accidental combinations are checked with the same required safety factors as the others; the governing code may allow lower ones.');
   } else if (request.selfWeight === true) {
     const without = combinations.filter((combination) => !combination.factors.has(SELF_WEIGHT_CASE)).map((combination) => combination.id);
-    if (without.length > 0) notices.push(`selfWeight is true but combinations ${without.join(', ')} give no factor for "${SELF_WEIGHT_CASE}": the member's own weight is left out of them.`);
+    if (without.length > 0) {
+      const named = without.map((id) => `"${id}"`).join(', ');
+      notices.push(`selfWeight is true, but ${without.length === 1 ? `combination ${named} gives` : `combinations ${named} give`} no factor for "${SELF_WEIGHT_CASE}": the member's own weight is left out there.`);
+    }
   }
   const fixedNodes = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
   for (const loads of read.caseLoads) for (const load of loads) fixedNodes.push(...(load.kind === 'point' ? [load.position] : [load.from, load.to]));

@@ -47,7 +47,11 @@ export function buildOpenApiDocument(contracts: readonly RouteContract[]) {
                 content: {
                   'application/json': {
                     schema: contract.body,
-                    ...(contract.exampleBody === undefined ? {} : { example: contract.exampleBody }),
+                    ...(contract.exampleBody === undefined
+                      ? {}
+                      : contract.moreExamples === undefined
+                        ? { example: contract.exampleBody }
+                        : { examples: { default: { summary: 'The example of the schema', value: contract.exampleBody }, ...contract.moreExamples } }),
                   },
                 },
               },

@@ -1,7 +1,8 @@
 /** Presenting the combinations, their moving-load envelopes and the governing combination in the response's units. */
 
 import { DIAGRAM_FIELDS, type DiagramField } from '../../engine/analysis/result.js';
-import { REACTION_COMPONENTS, type CombinationsOutcome, type ReactionBound, type ReactionComponent } from '../../engine/combinations/check-combinations.js';
+import type { CombinationsOutcome } from '../../engine/combinations/check-combinations.js';
+import { REACTION_COMPONENTS, type ReactionBound, type ReactionComponent } from '../../engine/combinations/train-envelope.js';
 import type { DiagramEnvelope } from '../../engine/combinations/diagram-envelope.js';
 import type { NormalisedCombinations } from '../normalise/load-combinations.js';
 import { present, type OutputUnits } from '../output-units.js';

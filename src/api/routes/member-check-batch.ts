@@ -4,7 +4,7 @@ import type { FastifyInstance } from 'fastify';
 import { SCREENING_CAUTION } from '../../engine/caution.js';
 import { problemFromError } from '../error-handler.js';
 import { finiteJson, sendJsonText } from '../answer-json.js';
-import { runMemberCheck, type Catalogues } from '../member-check.js';
+import { runMemberCheck, type Catalogues, type WorkBudget } from '../member-check.js';
 import { PROBLEMS, ProblemError } from '../problems.js';
 import type { RouteContract } from '../route-contract.js';
 import { BATCH_EXAMPLE, batchEnvelope, batchItem, batchRequest, batchResponse, MAX_BATCH_ITEMS } from '../schemas/batch-exchange.js';
@@ -13,12 +13,15 @@ import { parseBody } from '../validation.js';
 
 export const DEFAULT_BATCH_BODY_LIMIT = 16 * 1024 * 1024;
 
+/** Load states over all items (one for an item without combinations): bounds the work of one batch. */
+export const MAX_BATCH_LOAD_STATES = 20000;
+
 export const memberCheckBatchContract: RouteContract = {
   method: 'post',
   path: '/v1/member-checks/batch',
   operationId: 'checkMembers',
   summary: 'Check many members in one request',
-  description: `Up to ${MAX_BATCH_ITEMS} member checks, each answered as the single check would answer it; one bad item never fails the batch. The body may be up to 16 MiB by default, and the diagrams of all items together up to 200,000 points (413 beyond).`,
+  description: `Up to ${MAX_BATCH_ITEMS} member checks, each answered as the single check would answer it; one bad item never fails the batch. The body may be up to 16 MiB by default, and the diagrams of all items together up to 200,000 points (413 beyond). Items with load combinations share a budget of ${MAX_BATCH_LOAD_STATES} load states (one per combination and train position searched; one for an item without combinations): an item beyond it is answered with a 422 too-much-work problem of its own.`,
   tag: 'members',
   body: batchRequest,
   response: batchResponse,
@@ -46,12 +49,12 @@ function itemId(item: unknown): string | number | undefined {
   return (typeof id === 'string' && id.length <= 128) || (typeof id === 'number' && Number.isInteger(id)) ? id : undefined;
 }
 
-function checkItem(item: unknown, index: number, catalogues: Catalogues, instance: string): BatchOutcome {
+function checkItem(item: unknown, index: number, catalogues: Catalogues, instance: string, budget: WorkBudget): BatchOutcome {
   const id = itemId(item);
   const withId = id === undefined ? { index } : { index, id };
   try {
     const { id: _id, ...body } = parseBody(batchItem, item, ['items', index]);
-    const result = runMemberCheck(body, catalogues, ['items', index]);
+    const result = runMemberCheck(body, catalogues, ['items', index], budget);
     return { ...withId, status: 200, resultJson: finiteJson(result), verdict: result.verdict, utilization: result.governing?.utilization ?? 0 };
   } catch (error) {
     const problem = problemFromError(error);
@@ -78,7 +81,8 @@ export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number
       if (points > MAX_BATCH_DIAGRAM_POINTS) {
         throw new ProblemError('tooManyItems', `The batch asks for ${points} diagram points in all; at most ${MAX_BATCH_DIAGRAM_POINTS}: lower output.samples.`, [{ pointer: '/items', message: `at most ${MAX_BATCH_DIAGRAM_POINTS} diagram points in all` }]);
       }
-      const results = items.map((item, index) => checkItem(item, index, catalogues, request.url));
+      const budget: WorkBudget = { remaining: MAX_BATCH_LOAD_STATES, limit: MAX_BATCH_LOAD_STATES };
+      const results = items.map((item, index) => checkItem(item, index, catalogues, request.url, budget));
       let pass = 0;
       let fail = 0;
       let worst: { utilization: number; index: number } | undefined;

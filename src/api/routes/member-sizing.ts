@@ -19,7 +19,7 @@ export const memberSizingContract: RouteContract = {
   body: memberSizingRequest,
   response: memberSizingResponse,
   responseDescription: 'The selected section and the ranked candidates.',
-  problems: ['unknownDesignation', 'unknownGrade', 'unstableMember', 'impossibleGeometry', 'notApplicable', 'noPassingCandidate'],
+  problems: ['unknownDesignation', 'unknownGrade', 'unstableMember', 'impossibleGeometry', 'notApplicable', 'noPassingCandidate', 'tooMuchWork'],
   exampleBody: MEMBER_SIZING_EXAMPLE,
 };
 

@@ -1,7 +1,7 @@
 /** The load-combination part of a member-check answer: each combination, its envelope and the one that governs. */
 
 import { ACTION_CATEGORIES } from '../../engine/combinations/load-actions.js';
-import { REACTION_COMPONENTS } from '../../engine/combinations/check-combinations.js';
+import { REACTION_COMPONENTS } from '../../engine/combinations/train-envelope.js';
 import { DIAGRAM_FIELD_INFO, reactionOutput } from './analysis-output.js';
 import { failureCheckOutput, governingOutput } from './check-output.js';
 import { presentedQuantity } from './quantity.js';

@@ -27,6 +27,47 @@ export const MEMBER_CHECK_EXAMPLE = {
   output: { samples: 11, units: { length: 'mm', force: 'kN', moment: 'kN*m', stress: 'MPa' } },
 };
 
+/** An aisle beam of a fictional work-platform maker: decking, stored goods and a picking trolley, default combinations. */
+export const MEMBER_CHECK_COMBINATIONS_EXAMPLE = {
+  member: {
+    length: '4.2 m',
+    supports: [
+      { position: 0, type: 'pinned', label: 'column A' },
+      { position: '4.2 m', type: 'roller', label: 'column B' },
+    ],
+  },
+  section: { designation: 'IPE 240' },
+  material: { grade: 'S275' },
+  selfWeight: true,
+  loadCases: [
+    { id: 'decking', category: 'permanent', description: 'steel grating and handrail posts', loads: [{ type: 'distributed', from: 0, to: '4.2 m', qy: '-1.1 kN/m' }] },
+    { id: 'goods', category: 'imposed', description: 'cartons stored along the aisle', loads: [{ type: 'distributed', from: 0, to: '4.2 m', qy: '-3.5 kN/m' }] },
+  ],
+  movingLoads: [
+    {
+      id: 'trolley',
+      category: 'imposed',
+      description: 'hand-pushed picking trolley, two axles 0.8 m apart',
+      axles: [
+        { offset: 0, fy: '-2.5 kN' },
+        { offset: '0.8 m', fy: '-2.5 kN' },
+      ],
+      step: '0.05 m',
+    },
+  ],
+  output: { samples: 11, units: { length: 'mm', force: 'kN', moment: 'kN*m', stress: 'MPa' } },
+};
+
+/** The same beam with combinations of its own: a strength and a serviceability combination. */
+export const MEMBER_CHECK_GIVEN_COMBINATIONS_EXAMPLE = {
+  ...MEMBER_CHECK_COMBINATIONS_EXAMPLE,
+  combinations: [
+    { id: 'goods and trolley', purpose: 'strength', factors: { selfWeight: 1, decking: 1, goods: 1, trolley: 1 }, description: 'everything at once, characteristic values' },
+    { id: 'trolley deflection', purpose: 'serviceability', factors: { trolley: 1 }, description: 'deflection under the trolley alone' },
+  ],
+  criteria: { deflectionLimitRatio: 500 },
+};
+
 export const memberCheckRequest = z
   .strictObject({
     member: memberInput,

@@ -9,7 +9,7 @@ import { shapeInput } from './section-input.js';
 import { z } from './zod.js';
 
 export const MAX_CANDIDATES = 500;
-/** candidates x (loads + supports + hinges + 1): about a second of work at most. */
+/** candidates x load states x (loads + supports + hinges + 1): about a second of work at most. */
 export const MAX_SIZING_WORK = 20000;
 
 const designationList = z.array(z.string().min(1).max(64)).min(1).max(MAX_CANDIDATES);

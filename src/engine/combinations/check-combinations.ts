@@ -12,7 +12,7 @@
  */
 
 import { analyseMember } from '../analysis/analyse-member.js';
-import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis, type SupportReaction } from '../analysis/result.js';
+import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis } from '../analysis/result.js';
 import { ZERO_TOLERANCE, withoutNegativeZero } from '../analysis/tolerances.js';
 import type { MemberCheckInput } from '../checks/check-input.js';
 import { checkMember } from '../checks/check-member.js';
@@ -26,6 +26,7 @@ import { brentMaximum } from './brent-maximum.js';
 import { combinedStaticLoads, trainLoads } from './combined-loads.js';
 import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type DiagramEnvelope, type EnvelopePositions } from './diagram-envelope.js';
 import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
+import { REACTION_COMPONENTS, trainEnvelope, type ReactionBound, type ReactionBounds, type ReactionComponent, type TrainEnvelope } from './train-envelope.js';
 import { trainPositions } from './train-positions.js';
 
 export interface CombinationsInput {
@@ -53,14 +54,6 @@ export interface MovingExtreme {
   readonly loadPosition: number;
 }
 
-export const REACTION_COMPONENTS = ['fx', 'fy', 'fz', 'mx', 'my', 'mz'] as const;
-export type ReactionComponent = (typeof REACTION_COMPONENTS)[number];
-
-export interface ReactionBound {
-  readonly value: number;
-  readonly loadPosition: number;
-}
-
 export interface ReactionEnvelope {
   readonly position: number;
   readonly max: Readonly<Record<ReactionComponent, ReactionBound>>;
@@ -70,7 +63,7 @@ export interface ReactionEnvelope {
 export interface MovingLoadResult {
   readonly id: string;
   readonly factor: number;
-  /** The train positions visited on the grid and at the nodes (refinements not counted). */
+  /** The train positions at which the checks were made, on the grid and at the nodes (refinements not counted). */
   readonly positionsSearched: number;
   readonly extremes: Readonly<Record<DiagramField, { readonly max: MovingExtreme; readonly min: MovingExtreme }>>;
   readonly reactions: readonly ReactionEnvelope[];
@@ -220,20 +213,29 @@ function movingLoadOf(combination: CombinationModel, index: number, movingLoads:
   return train === undefined ? null : { train, factor: combination.factors.get(train.id) as number };
 }
 
-interface ReactionBounds {
-  readonly max: Record<ReactionComponent, ReactionBound>;
-  readonly min: Record<ReactionComponent, ReactionBound>;
+/** The fixed loads' own envelope plus factor x the train's: the train's largest values where the factor is positive, its smallest where negative. */
+function superposedEnvelope(fixed: DiagramEnvelope, train: TrainEnvelope, factor: number): DiagramEnvelope {
+  for (const field of DIAGRAM_FIELDS) {
+    const up = factor >= 0 ? train.max[field] : train.min[field];
+    const down = factor >= 0 ? train.min[field] : train.max[field];
+    fixed.max[field].forEach((value, k, column) => (column[k] = value + factor * (up[k] as number)));
+    fixed.min[field].forEach((value, k, column) => (column[k] = value + factor * (down[k] as number)));
+  }
+  return fixed;
 }
 
-function reactionBounds(reactions: readonly SupportReaction[]): ReactionBounds[] {
-  return reactions.map(() => {
+function superposedReactions(fixed: MemberAnalysis, train: TrainEnvelope, factor: number): ReactionEnvelope[] {
+  return fixed.reactions.map((reaction, i) => {
+    const bounds = train.reactions[i] as ReactionBounds;
     const max = {} as Record<ReactionComponent, ReactionBound>;
     const min = {} as Record<ReactionComponent, ReactionBound>;
     for (const component of REACTION_COMPONENTS) {
-      max[component] = { value: -Infinity, loadPosition: 0 };
-      min[component] = { value: Infinity, loadPosition: 0 };
+      const up = factor >= 0 ? bounds.max[component] : bounds.min[component];
+      const down = factor >= 0 ? bounds.min[component] : bounds.max[component];
+      max[component] = { value: reaction[component] + factor * up.value, loadPosition: up.loadPosition };
+      min[component] = { value: reaction[component] + factor * down.value, loadPosition: down.loadPosition };
     }
-    return { max, min };
+    return { position: reaction.position, max, min };
   });
 }
 
@@ -241,6 +243,7 @@ function checkMovingCombination(
   input: CombinationsInput,
   combination: CombinationModel,
   moving: { train: MovingLoadModel; factor: number },
+  trainEnvelopeOf: (train: MovingLoadModel) => TrainEnvelope,
   fixedNodes: readonly number[],
   positions: EnvelopePositions,
   worst: WorstChecks,
@@ -255,33 +258,20 @@ function checkMovingCombination(
     return state;
   };
   const trainAt = trainPositions(moving.train, fixedNodes, length);
-  const envelope = emptyEnvelope(positions);
   const utilization: number[] = [];
   const fieldMax = Object.fromEntries(DIAGRAM_FIELDS.map((field) => [field, [] as number[]])) as Record<DiagramField, number[]>;
   const fieldMin = Object.fromEntries(DIAGRAM_FIELDS.map((field) => [field, [] as number[]])) as Record<DiagramField, number[]>;
-  let bounds: ReactionBounds[] | null = null;
   for (const p of trainAt) {
     const state = stateAt(p);
     utilization.push(state.outcome.governing?.utilization ?? 0);
-    widenEnvelope(envelope, positions, state.analysis);
     for (const field of DIAGRAM_FIELDS) {
       fieldMax[field].push(state.analysis.extremes[field].max.value);
       fieldMin[field].push(-state.analysis.extremes[field].min.value);
     }
-    bounds ??= reactionBounds(state.analysis.reactions);
-    state.analysis.reactions.forEach((reaction, i) => {
-      const bound = (bounds as ReactionBounds[])[i] as ReactionBounds;
-      for (const component of REACTION_COMPONENTS) {
-        const value = reaction[component];
-        if (value > bound.max[component].value) bound.max[component] = { value, loadPosition: p };
-        if (value < bound.min[component].value) bound.min[component] = { value, loadPosition: p };
-      }
-    });
   }
   const tolerance = REFINEMENT_TOLERANCE * length;
   const governing = refinedMaximum(trainAt, utilization, (p) => stateAt(p).outcome.governing?.utilization ?? 0, tolerance);
   const state = stateAt(governing.position);
-  widenEnvelope(envelope, positions, state.analysis);
 
   const extremes = {} as Record<DiagramField, { max: MovingExtreme; min: MovingExtreme }>;
   for (const field of DIAGRAM_FIELDS) {
@@ -297,13 +287,22 @@ function checkMovingCombination(
     };
     extremes[field] = { max: refine('max', fieldMax[field]), min: refine('min', fieldMin[field]) };
   }
-  const reactions = state.analysis.reactions.map((reaction, i) => ({ position: reaction.position, ...((bounds as ReactionBounds[])[i] as ReactionBounds) }));
+  const fixed = analyseMember({ ...member, loads: staticLoads });
+  const train = trainEnvelopeOf(moving.train);
+  const envelope = emptyEnvelope(positions);
+  widenEnvelope(envelope, positions, fixed);
   return {
     combination,
     state,
     loadPosition: governing.position,
-    movingLoad: { id: moving.train.id, factor: moving.factor, positionsSearched: trainAt.length, extremes, reactions },
-    envelope,
+    movingLoad: {
+      id: moving.train.id,
+      factor: moving.factor,
+      positionsSearched: trainAt.length,
+      extremes,
+      reactions: superposedReactions(fixed, train, moving.factor),
+    },
+    envelope: superposedEnvelope(envelope, train, moving.factor),
   };
 }
 
@@ -386,9 +385,18 @@ export function checkCombinations(input: CombinationsInput): CombinationsOutcome
   const fixedNodes = fixedNodesOf(member, cases);
   const positions = envelopePositions(member.length, input.samples, fixedNodes);
   const worst = new WorstChecks();
+  const trainEnvelopes = new Map<string, TrainEnvelope>();
+  const trainEnvelopeOf = (train: MovingLoadModel): TrainEnvelope => {
+    let known = trainEnvelopes.get(train.id);
+    if (known === undefined) {
+      known = trainEnvelope(member, train, positions);
+      trainEnvelopes.set(train.id, known);
+    }
+    return known;
+  };
   const results = combinations.map((combination, index): CombinationResult => {
     const moving = movingLoadOf(combination, index, input.movingLoads);
-    if (moving !== null) return checkMovingCombination(input, combination, moving, fixedNodes, positions, worst);
+    if (moving !== null) return checkMovingCombination(input, combination, moving, trainEnvelopeOf, fixedNodes, positions, worst);
     const state = evaluateState(member, combinedStaticLoads(cases, combination), input, combination.purpose);
     worst.note(state.outcome, combination.id, null);
     const envelope = emptyEnvelope(positions);

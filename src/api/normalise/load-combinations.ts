@@ -174,9 +174,8 @@ export function resolveCombinations(request: CombinationFields, read: ReadCombin
       notices.push(`selfWeight is true, but ${without.length === 1 ? `combination ${named} gives` : `combinations ${named} give`} no factor for "${SELF_WEIGHT_CASE}": the member's own weight is left out there.`);
     }
   }
-  const fixedNodes = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
-  for (const loads of read.caseLoads) for (const load of loads) fixedNodes.push(...(load.kind === 'point' ? [load.position] : [load.from, load.to]));
-  const positionsOf = new Map(movingLoads.map((train) => [train.id, trainPositions(train, fixedNodes, member.length).length]));
+  const structuralNodes = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
+  const positionsOf = new Map(movingLoads.map((train) => [train.id, trainPositions(train, structuralNodes, member.length).length]));
   let loadStates = 0;
   let axles = 0;
   for (const combination of combinations) {

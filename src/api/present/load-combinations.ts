@@ -81,7 +81,7 @@ export function presentLoadCombinations(normalised: NormalisedCombinations, outc
                   max: presentBounds(reaction.max, units),
                   min: presentBounds(reaction.min, units),
                 })),
-                envelope: presentEnvelope(result.envelope, units),
+                envelope: presentEnvelope(result.envelope as DiagramEnvelope, units),
               },
         reactions: presentReactions(state.analysis, labels, units),
         checks: presentCheckList(state.outcome.checks, units),

@@ -91,7 +91,7 @@ function isZeroField(pieces: readonly MemberPiece[], field: DiagramField): boole
  * The extremes of one field over the pieces. A field zero everywhere gives +0 at every candidate, so
  * both extremes are 0 at the first one, the start of the member, as the search would find them.
  */
-function extremesOfField(pieces: readonly MemberPiece[], field: DiagramField): FieldExtremes {
+export function extremesOfField(pieces: readonly MemberPiece[], field: DiagramField): FieldExtremes {
   if (isZeroField(pieces, field)) {
     const start = (pieces[0] as MemberPiece).start;
     return { max: { value: 0, position: start }, min: { value: 0, position: start } };

@@ -6,8 +6,8 @@
  * states, one for each position of the train: the search visits every position of trainPositions(), then
  * refines, by Brent's method, the neighbourhood of the two best positions for the governing utilization
  * and for the largest and smallest value of every diagram. Between the nodes a response is a polynomial
- * of low degree in the load position, so the refined extremes are exact to within 1e-8 of the member
- * length in position (checked against the closed-form absolute maximum moment of a simple span under
+ * of low degree in the load position, so the refined extremes are exact to rounding in value and to
+ * about 1e-7 of the member length in position (checked against the closed-form absolute maximum moment of a simple span under
  * two moving loads, AISC Steel Construction Manual, beam diagrams, cases 43 and 44).
  */
 
@@ -27,6 +27,7 @@ import { combinedStaticLoads, trainLoads } from './combined-loads.js';
 import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type DiagramEnvelope, type EnvelopePositions } from './diagram-envelope.js';
 import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
 import { REACTION_COMPONENTS, trainEnvelope, type ReactionBound, type ReactionBounds, type ReactionComponent, type TrainEnvelope } from './train-envelope.js';
+import { superposedFieldExtremes } from './superposed-extremes.js';
 import { trainPositions } from './train-positions.js';
 
 export interface CombinationsInput {
@@ -76,8 +77,8 @@ export interface CombinationResult {
   /** Where the train's reference point stands in `state`; null without a moving load. */
   readonly loadPosition: number | null;
   readonly movingLoad: MovingLoadResult | null;
-  /** Largest and smallest value at the envelope positions over every state of the combination. */
-  readonly envelope: DiagramEnvelope;
+  /** With a moving load: largest and smallest value at the envelope positions over every train position; null without. */
+  readonly envelope: DiagramEnvelope | null;
 }
 
 /** A check at its worst over every combination and train position, and where that was. */
@@ -101,9 +102,13 @@ export interface CombinationsOutcome {
 const SERVICEABILITY_MODES: readonly FailureMode[] = ['deflection', 'twist'];
 /** Modes checked separately per span, segment or support: their location is part of what they are. */
 const LOCATED_MODES: readonly FailureMode[] = ['deflection', 'lateral-torsional-buckling', 'pin-shear', 'pin-bearing'];
-/** Position tolerance of the refinement, relative to the member length. */
-const REFINEMENT_TOLERANCE = 1e-8;
-/** The refinement looks near this many of the best grid positions. */
+/**
+ * Position tolerance of the refinement, relative to the member length. A smooth maximum cannot be
+ * located much closer than sqrt(machine epsilon) ~ 1.5e-8 (the values there agree to rounding), and a
+ * tighter tolerance only spends evaluations on rounding noise; the value is then exact to about 1e-14.
+ */
+const REFINEMENT_TOLERANCE = 1e-7;
+/** The refinement of the governing utilization looks near this many of the best grid positions; a diagram's extremes near the best one. */
 const PEAKS_REFINED = 2;
 
 function servesPurpose(mode: FailureMode, purpose: CombinationPurpose): boolean {
@@ -136,8 +141,14 @@ function validateCases(member: Omit<MemberModel, 'loads'>, cases: readonly LoadC
   });
 }
 
+/** Ends, supports and hinges: where an axle makes a breakpoint of every response (a load-case load does not). */
+function structuralNodesOf(member: Omit<MemberModel, 'loads'>): number[] {
+  return [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
+}
+
+/** The structural nodes and every load-case load point and end: where the fixed loads' diagrams may jump or kink. */
 function fixedNodesOf(member: Omit<MemberModel, 'loads'>, cases: readonly LoadCaseModel[]): number[] {
-  const nodes = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
+  const nodes = structuralNodesOf(member);
   for (const loadCase of cases) {
     for (const load of loadCase.loads) {
       if (load.kind === 'point') nodes.push(load.position);
@@ -184,11 +195,11 @@ function peakIndices(values: readonly number[], count: number): number[] {
  * The largest value of f over the positions, refined near the best grid peaks: returns the position and
  * value, the grid's own when no refinement beats it.
  */
-function refinedMaximum(positions: readonly number[], values: readonly number[], f: (p: number) => number, tolerance: number): { position: number; value: number } {
+function refinedMaximum(positions: readonly number[], values: readonly number[], f: (p: number) => number, tolerance: number, peaks = PEAKS_REFINED): { position: number; value: number } {
   let best = { position: positions[0] as number, value: values[0] as number };
   for (let k = 1; k < values.length; k++) if ((values[k] as number) > best.value) best = { position: positions[k] as number, value: values[k] as number };
   if (positions.length < 2) return best;
-  for (const k of peakIndices(values, PEAKS_REFINED)) {
+  for (const k of peakIndices(values, peaks)) {
     const lo = positions[Math.max(0, k - 1)] as number;
     const hi = positions[Math.min(positions.length - 1, k + 1)] as number;
     const found = brentMaximum(f, lo, hi, tolerance);
@@ -244,7 +255,7 @@ function checkMovingCombination(
   combination: CombinationModel,
   moving: { train: MovingLoadModel; factor: number },
   trainEnvelopeOf: (train: MovingLoadModel) => TrainEnvelope,
-  fixedNodes: readonly number[],
+  structuralNodes: readonly number[],
   positions: EnvelopePositions,
   worst: WorstChecks,
 ): CombinationResult {
@@ -257,7 +268,7 @@ function checkMovingCombination(
     worst.note(state.outcome, combination.id, p);
     return state;
   };
-  const trainAt = trainPositions(moving.train, fixedNodes, length);
+  const trainAt = trainPositions(moving.train, structuralNodes, length);
   const utilization: number[] = [];
   const fieldMax = Object.fromEntries(DIAGRAM_FIELDS.map((field) => [field, [] as number[]])) as Record<DiagramField, number[]>;
   const fieldMin = Object.fromEntries(DIAGRAM_FIELDS.map((field) => [field, [] as number[]])) as Record<DiagramField, number[]>;
@@ -273,21 +284,32 @@ function checkMovingCombination(
   const governing = refinedMaximum(trainAt, utilization, (p) => stateAt(p).outcome.governing?.utilization ?? 0, tolerance);
   const state = stateAt(governing.position);
 
+  // A diagram's extremes at many train positions: the fixed loads analysed once, the train alone at
+  // each position, the two superposed (see superposed-extremes.ts).
+  const fixed = analyseMember({ ...member, loads: staticLoads });
+  const trainAnalyses = new Map<number, MemberAnalysis>();
+  const trainAnalysisAt = (p: number): MemberAnalysis => {
+    let known = trainAnalyses.get(p);
+    if (known === undefined) {
+      known = analyseMember({ ...member, loads: trainLoads(moving.train, p, 1, length) });
+      trainAnalyses.set(p, known);
+    }
+    return known;
+  };
   const extremes = {} as Record<DiagramField, { max: MovingExtreme; min: MovingExtreme }>;
   for (const field of DIAGRAM_FIELDS) {
     const identicallyZero = fieldMax[field].every((value) => value === 0) && fieldMin[field].every((value) => value === 0);
     const extremeAt = (p: number, side: 'max' | 'min'): MovingExtreme => {
-      const extreme = analyseMember({ ...member, loads: loadsAt(p) }).extremes[field][side];
+      const extreme = superposedFieldExtremes(fixed, trainAnalysisAt(p), moving.factor, field)[side];
       return { value: extreme.value, position: extreme.position, loadPosition: p };
     };
     const refine = (side: 'max' | 'min', values: readonly number[]): MovingExtreme => {
       const sign = side === 'max' ? 1 : -1;
-      const best = identicallyZero ? { position: trainAt[0] as number, value: 0 } : refinedMaximum(trainAt, values, (p) => sign * extremeAt(p, side).value, tolerance);
+      const best = identicallyZero ? { position: trainAt[0] as number, value: 0 } : refinedMaximum(trainAt, values, (p) => sign * extremeAt(p, side).value, tolerance, 1);
       return extremeAt(best.position, side);
     };
     extremes[field] = { max: refine('max', fieldMax[field]), min: refine('min', fieldMin[field]) };
   }
-  const fixed = analyseMember({ ...member, loads: staticLoads });
   const train = trainEnvelopeOf(moving.train);
   const envelope = emptyEnvelope(positions);
   widenEnvelope(envelope, positions, fixed);
@@ -317,16 +339,6 @@ function roundEnvelope(envelope: DiagramEnvelope): DiagramEnvelope {
     envelope.min[field].forEach((value, k, column) => (column[k] = round(value)));
   }
   return envelope;
-}
-
-function copyEnvelope(envelope: DiagramEnvelope): DiagramEnvelope {
-  const max = {} as Record<DiagramField, number[]>;
-  const min = {} as Record<DiagramField, number[]>;
-  for (const field of DIAGRAM_FIELDS) {
-    max[field] = [...envelope.max[field]];
-    min[field] = [...envelope.min[field]];
-  }
-  return { x: envelope.x, max, min };
 }
 
 function aggregateOutcome(results: readonly CombinationResult[], worstChecks: readonly WorstCheck[]): { outcome: MemberCheckOutcome; governing: number } {
@@ -382,9 +394,11 @@ export function checkCombinations(input: CombinationsInput): CombinationsOutcome
   const { member, cases, combinations } = input;
   if (combinations.length === 0) throw new EngineError('not-applicable', 'There is no combination to check.', ['combinations']);
   validateCases(member, cases);
-  const fixedNodes = fixedNodesOf(member, cases);
-  const positions = envelopePositions(member.length, input.samples, fixedNodes);
+  const structuralNodes = structuralNodesOf(member);
+  const positions = envelopePositions(member.length, input.samples, fixedNodesOf(member, cases));
   const worst = new WorstChecks();
+  const envelopes: Record<CombinationPurpose, DiagramEnvelope | null> = { strength: null, serviceability: null };
+  const envelopeOf = (purpose: CombinationPurpose): DiagramEnvelope => (envelopes[purpose] ??= emptyEnvelope(positions));
   const trainEnvelopes = new Map<string, TrainEnvelope>();
   const trainEnvelopeOf = (train: MovingLoadModel): TrainEnvelope => {
     let known = trainEnvelopes.get(train.id);
@@ -396,19 +410,15 @@ export function checkCombinations(input: CombinationsInput): CombinationsOutcome
   };
   const results = combinations.map((combination, index): CombinationResult => {
     const moving = movingLoadOf(combination, index, input.movingLoads);
-    if (moving !== null) return checkMovingCombination(input, combination, moving, trainEnvelopeOf, fixedNodes, positions, worst);
+    if (moving !== null) return checkMovingCombination(input, combination, moving, trainEnvelopeOf, structuralNodes, positions, worst);
     const state = evaluateState(member, combinedStaticLoads(cases, combination), input, combination.purpose);
     worst.note(state.outcome, combination.id, null);
-    const envelope = emptyEnvelope(positions);
-    widenEnvelope(envelope, positions, state.analysis);
-    return { combination, state, loadPosition: null, movingLoad: null, envelope };
+    widenEnvelope(envelopeOf(combination.purpose), positions, state.analysis);
+    return { combination, state, loadPosition: null, movingLoad: null, envelope: null };
   });
-  const envelopes: Record<CombinationPurpose, DiagramEnvelope | null> = { strength: null, serviceability: null };
   for (const result of results) {
-    const purpose = result.combination.purpose;
-    const known = envelopes[purpose];
-    if (known === null) envelopes[purpose] = copyEnvelope(result.envelope);
-    else mergeEnvelope(known, result.envelope);
+    if (result.envelope === null) continue;
+    mergeEnvelope(envelopeOf(result.combination.purpose), result.envelope);
     roundEnvelope(result.envelope);
   }
   for (const envelope of Object.values(envelopes)) if (envelope !== null) roundEnvelope(envelope);

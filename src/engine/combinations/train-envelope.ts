@@ -81,45 +81,71 @@ function fieldsAtPositions(analysis: MemberAnalysis, positions: EnvelopePosition
   }
 }
 
+/** Where a fitted cubic is largest and smallest on [0, 1], and its values there: written by cubicRange. */
+interface CubicRange {
+  max: number;
+  tMax: number;
+  min: number;
+  tMin: number;
+}
+
 /**
- * The cubic through (t_i, y_i) at the four fit points, as its value at 0 and 1 and at its stationary
- * points in (0, 1): calls visit(t, value) for each.
+ * The largest and smallest value on [0, 1] of the cubic through (t_i, y_i) at the four fit points:
+ * at 0, at 1, or where its derivative vanishes inside. Writes into `range` (no allocation: it runs for
+ * every field at every position of every interval).
  */
-function cubicCandidates(y0: number, y1: number, y2: number, y3: number, visit: (t: number, value: number) => void): void {
-  const [t0, t1, t2, t3] = FIT_POINTS as [number, number, number, number];
+function cubicRange(y0: number, y1: number, y2: number, y3: number, range: CubicRange): void {
+  const t0 = FIT_POINTS[0] as number;
+  const t1 = FIT_POINTS[1] as number;
+  const t2 = FIT_POINTS[2] as number;
+  const t3 = FIT_POINTS[3] as number;
   // Newton's divided differences, then the monomial coefficients c0 + c1 t + c2 t^2 + c3 t^3.
   const d01 = (y1 - y0) / (t1 - t0);
   const d12 = (y2 - y1) / (t2 - t1);
   const d23 = (y3 - y2) / (t3 - t2);
   const d012 = (d12 - d01) / (t2 - t0);
   const d123 = (d23 - d12) / (t3 - t1);
-  const d0123 = (d123 - d012) / (t3 - t0);
-  // p(t) = y0 + d01 (t - t0) + d012 (t - t0)(t - t1) + d0123 (t - t0)(t - t1)(t - t2)
-  const c3 = d0123;
-  const c2 = d012 - d0123 * (t0 + t1 + t2);
-  const c1 = d01 - d012 * (t0 + t1) + d0123 * (t0 * t1 + t0 * t2 + t1 * t2);
-  const c0 = y0 - d01 * t0 + d012 * t0 * t1 - d0123 * t0 * t1 * t2;
-  const at = (t: number) => ((c3 * t + c2) * t + c1) * t + c0;
-  visit(0, at(0));
-  visit(1, at(1));
-  // p'(t) = 3 c3 t^2 + 2 c2 t + c1
+  const c3 = (d123 - d012) / (t3 - t0);
+  const c2 = d012 - c3 * (t0 + t1 + t2);
+  const c1 = d01 - d012 * (t0 + t1) + c3 * (t0 * t1 + t0 * t2 + t1 * t2);
+  const c0 = y0 - d01 * t0 + d012 * t0 * t1 - c3 * t0 * t1 * t2;
+  const at1 = c0 + c1 + c2 + c3;
+  range.max = c0;
+  range.tMax = 0;
+  range.min = c0;
+  range.tMin = 0;
+  consider(range, 1, at1);
+  // p'(t) = 3 c3 t^2 + 2 c2 t + c1 = a t^2 + b t + c1
   const a = 3 * c3;
   const b = 2 * c2;
   const scale = Math.abs(a) + Math.abs(b) + Math.abs(c1);
   if (scale === 0) return;
   if (Math.abs(a) <= 1e-12 * scale) {
-    if (Math.abs(b) > 1e-12 * scale) {
-      const t = -c1 / b;
-      if (t > 0 && t < 1) visit(t, at(t));
-    }
+    if (Math.abs(b) > 1e-12 * scale) considerRoot(range, -c1 / b, c0, c1, c2, c3);
     return;
   }
   const discriminant = b * b - 4 * a * c1;
   if (discriminant < 0) return;
   const root = Math.sqrt(discriminant);
-  // Numerically stable pair of roots.
+  // The numerically stable pair of roots.
   const q = -0.5 * (b + (b >= 0 ? root : -root));
-  for (const t of [q / a, q === 0 ? Number.NaN : c1 / q]) if (t > 0 && t < 1) visit(t, at(t));
+  considerRoot(range, q / a, c0, c1, c2, c3);
+  if (q !== 0) considerRoot(range, c1 / q, c0, c1, c2, c3);
+}
+
+function consider(range: CubicRange, t: number, value: number): void {
+  if (value > range.max) {
+    range.max = value;
+    range.tMax = t;
+  }
+  if (value < range.min) {
+    range.min = value;
+    range.tMin = t;
+  }
+}
+
+function considerRoot(range: CubicRange, t: number, c0: number, c1: number, c2: number, c3: number): void {
+  if (t > 0 && t < 1) consider(range, t, ((c3 * t + c2) * t + c1) * t + c0);
 }
 
 function emptyBounds(supports: number): ReactionBounds[] {
@@ -164,6 +190,7 @@ export function trainEnvelope(member: Omit<MemberModel, 'loads'>, train: MovingL
     });
   }
   const samples = FIT_POINTS.map(() => new Float64Array(fieldCount * count));
+  const range: CubicRange = { max: 0, tMax: 0, min: 0, tMin: 0 };
   for (let b = 0; b + 1 < breakpoints.length; b++) {
     const start = breakpoints[b] as number;
     const width = (breakpoints[b + 1] as number) - start;
@@ -175,16 +202,17 @@ export function trainEnvelope(member: Omit<MemberModel, 'loads'>, train: MovingL
     analyses += 4;
     const [s0, s1, s2, s3] = samples as [Float64Array, Float64Array, Float64Array, Float64Array];
     for (let j = 0; j < fieldCount * count; j++) {
-      cubicCandidates(s0[j] as number, s1[j] as number, s2[j] as number, s3[j] as number, (_t, value) => {
-        if (value > (max[j] as number)) max[j] = value;
-        if (value < (min[j] as number)) min[j] = value;
-      });
+      cubicRange(s0[j] as number, s1[j] as number, s2[j] as number, s3[j] as number, range);
+      if (range.max > (max[j] as number)) max[j] = range.max;
+      if (range.min < (min[j] as number)) min[j] = range.min;
     }
     const [a0, a1, a2, a3] = fits as [MemberAnalysis, MemberAnalysis, MemberAnalysis, MemberAnalysis];
     reactions.forEach((bounds, s) => {
       for (const component of REACTION_COMPONENTS) {
         const r = (analysis: MemberAnalysis) => (analysis.reactions[s] as MemberAnalysis['reactions'][number])[component];
-        cubicCandidates(r(a0), r(a1), r(a2), r(a3), (t, value) => note(bounds, component, value, start + t * width));
+        cubicRange(r(a0), r(a1), r(a2), r(a3), range);
+        note(bounds, component, range.max, start + range.tMax * width);
+        note(bounds, component, range.min, start + range.tMin * width);
       }
     });
   }

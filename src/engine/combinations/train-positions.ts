@@ -1,9 +1,8 @@
 /**
  * Where a moving load's reference point is placed in the search: an even grid from `from` to `to` no
- * coarser than `step`, plus every position that puts an axle on a fixed node (support, hinge, load-case
- * load point or end). On a statically determinate member each influence line is straight between
- * those nodes, so reactions and the extremes reached under an axle at a node are exact there; elsewhere
- * the search is refined by Brent's method (see check-combinations.ts).
+ * coarser than `step`, plus every position that puts an axle on an end, support or hinge, where every
+ * response of the member has a breakpoint as a function of the train position (reactions and shears
+ * peak there). Between them the search is refined by Brent's method (see check-combinations.ts).
  */
 
 import { POSITION_TOLERANCE } from '../analysis/tolerances.js';
@@ -16,13 +15,13 @@ export function gridIntervals(train: Pick<MovingLoadModel, 'from' | 'to' | 'step
   return Math.max(1, Math.ceil(span / train.step - 1e-9));
 }
 
-export function trainPositions(train: MovingLoadModel, fixedNodes: readonly number[], length: number): number[] {
+export function trainPositions(train: MovingLoadModel, structuralNodes: readonly number[], length: number): number[] {
   const tolerance = POSITION_TOLERANCE * length;
   const intervals = gridIntervals(train);
   const positions: number[] = [];
   for (let k = 0; k <= intervals; k++) positions.push(k === intervals ? train.to : train.from + ((train.to - train.from) * k) / Math.max(1, intervals));
   for (const axle of train.axles) {
-    for (const node of fixedNodes) {
+    for (const node of structuralNodes) {
       const position = node - axle.offset;
       if (position >= train.from - tolerance && position <= train.to + tolerance) positions.push(Math.min(train.to, Math.max(train.from, position)));
     }

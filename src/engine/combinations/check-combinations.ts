@@ -26,6 +26,7 @@ import { brentMaximum } from './brent-maximum.js';
 import { combinedStaticLoads, trainLoads } from './combined-loads.js';
 import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type DiagramEnvelope, type EnvelopePositions } from './diagram-envelope.js';
 import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
+import { influenceLines, type InfluenceLines } from './influence-lines.js';
 import { REACTION_COMPONENTS, trainEnvelope, type ReactionBound, type ReactionBounds, type ReactionComponent, type TrainEnvelope } from './train-envelope.js';
 import { superposedFieldExtremes } from './superposed-extremes.js';
 import { trainPositions } from './train-positions.js';
@@ -400,10 +401,12 @@ export function checkCombinations(input: CombinationsInput): CombinationsOutcome
   const envelopes: Record<CombinationPurpose, DiagramEnvelope | null> = { strength: null, serviceability: null };
   const envelopeOf = (purpose: CombinationPurpose): DiagramEnvelope => (envelopes[purpose] ??= emptyEnvelope(positions));
   const trainEnvelopes = new Map<string, TrainEnvelope>();
+  let lines: InfluenceLines | null = null;
   const trainEnvelopeOf = (train: MovingLoadModel): TrainEnvelope => {
     let known = trainEnvelopes.get(train.id);
     if (known === undefined) {
-      known = trainEnvelope(member, train, positions);
+      lines ??= influenceLines(member, positions);
+      known = trainEnvelope(lines, train);
       trainEnvelopes.set(train.id, known);
     }
     return known;

@@ -11,9 +11,10 @@ import { evaluatePolynomial } from '../../../src/engine/analysis/polynomial.js';
 import { trainLoads } from '../../../src/engine/combinations/combined-loads.js';
 import { envelopePositions, type EnvelopePositions } from '../../../src/engine/combinations/diagram-envelope.js';
 import type { MovingLoadModel } from '../../../src/engine/combinations/load-actions.js';
+import { influenceLines } from '../../../src/engine/combinations/influence-lines.js';
 import { REACTION_COMPONENTS, trainEnvelope } from '../../../src/engine/combinations/train-envelope.js';
 import type { MemberModel, SupportModel } from '../../../src/engine/member/model.js';
-import { DEMO_STIFFNESS, fixedAt, pinnedAt, rollerAt } from '../member/model-builders.js';
+import { DEMO_STIFFNESS, fixedAt, pinnedAt, rollerAt, supportAt } from '../member/model-builders.js';
 
 function valueAt(analysis: MemberAnalysis, positions: EnvelopePositions, field: (typeof DIAGRAM_FIELDS)[number], k: number): number {
   const x = positions.x[k] as number;
@@ -22,7 +23,7 @@ function valueAt(analysis: MemberAnalysis, positions: EnvelopePositions, field: 
   return evaluatePolynomial(piece.fields[field], x - piece.start);
 }
 
-/** Invented members of a shelving maker: simple spans, a continuous two-bay beam, a propped cantilever with an overhang. */
+/** Invented members of a shelving maker: simple spans, a continuous two-bay beam, a propped cantilever with an overhang, a hinged beam, a beam on a spring. */
 const members = fc.oneof(
   fc.record({ length: fc.double({ min: 1, max: 8, noNaN: true }) }).map(({ length }) => ({ length, supports: [pinnedAt(0), rollerAt(length)], hinges: [] as number[] })),
   fc.record({ length: fc.double({ min: 2, max: 10, noNaN: true }), middle: fc.double({ min: 0.3, max: 0.7, noNaN: true }) }).map(({ length, middle }) => ({
@@ -33,6 +34,17 @@ const members = fc.oneof(
   fc.record({ length: fc.double({ min: 1, max: 6, noNaN: true }), prop: fc.double({ min: 0.5, max: 0.9, noNaN: true }) }).map(({ length, prop }) => ({
     length,
     supports: [fixedAt(0), rollerAt(prop * length)],
+    hinges: [] as number[],
+  })),
+  // A hinged two-bay beam (fixed, hinge, roller) and a beam on a spring support in the middle.
+  fc.record({ length: fc.double({ min: 2, max: 8, noNaN: true }), hinge: fc.double({ min: 0.2, max: 0.45, noNaN: true }) }).map(({ length, hinge }) => ({
+    length,
+    supports: [fixedAt(0), rollerAt(length)],
+    hinges: [hinge * length],
+  })),
+  fc.record({ length: fc.double({ min: 2, max: 8, noNaN: true }), stiffness: fc.double({ min: 1e5, max: 1e8, noNaN: true }) }).map(({ length, stiffness }) => ({
+    length,
+    supports: [pinnedAt(0), supportAt(0.5 * length, { uy: { spring: stiffness }, uz: { spring: stiffness } }), rollerAt(length)],
     hinges: [] as number[],
   })),
 );
@@ -49,12 +61,12 @@ describe('trainEnvelope', () => {
   it('bounds the fields and reactions of every position of the train, and reaches its bounds (property)', () => {
     fc.assert(
       fc.property(members, trains, fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 5, maxLength: 5 }), fc.integer({ min: 3, max: 15 }), (shape, axles, fractions, samples) => {
-        const member: Omit<MemberModel, 'loads'> = { length: shape.length, supports: shape.supports as SupportModel[], hinges: [], stiffness: DEMO_STIFFNESS };
+        const member: Omit<MemberModel, 'loads'> = { length: shape.length, supports: shape.supports as SupportModel[], hinges: shape.hinges.map((position) => ({ position })), stiffness: DEMO_STIFFNESS };
         const spread = Math.max(...axles.map((axle) => axle.offset));
         const train: MovingLoadModel = { id: 't', category: 'imposed', axles, from: -spread, to: shape.length, step: shape.length / 20 };
-        const nodes = [0, shape.length, ...member.supports.map((support) => support.position)];
+        const nodes = [0, shape.length, ...member.supports.map((support) => support.position), ...shape.hinges];
         const positions = envelopePositions(shape.length, samples, nodes);
-        const envelope = trainEnvelope(member, train, positions);
+        const envelope = trainEnvelope(influenceLines(member, positions), train);
         for (const fraction of fractions) {
           const p = train.from + fraction * (train.to - train.from);
           const analysis = analyseMember({ ...member, loads: trainLoads(train, p, 1, shape.length) });
@@ -97,7 +109,7 @@ describe('trainEnvelope', () => {
     const member: Omit<MemberModel, 'loads'> = { length, supports: [pinnedAt(0), rollerAt(length)], hinges: [], stiffness: DEMO_STIFFNESS };
     const train: MovingLoadModel = { id: 't', category: 'imposed', axles: [{ offset: 0, fy: -10e3, fz: 0 }], from: 0, to: length, step: 0.5 };
     const positions = envelopePositions(length, 3, [0, length]);
-    const envelope = trainEnvelope(member, train, positions);
+    const envelope = trainEnvelope(influenceLines(member, positions), train);
     expect(positions.x).toEqual([0, 3, 6]);
     expect(envelope.max.momentZ[1]).toBeCloseTo((10e3 * length) / 4, 6);
     expect(envelope.min.momentZ[1]).toBeCloseTo(0, 6);

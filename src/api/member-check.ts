@@ -73,14 +73,15 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
   const pins = normalisePins(request.member.supports, catalogues.materials, reader, [...base, 'member', 'supports']);
   const units = resolveOutputUnits(request.output?.units, [...base, 'output', 'units']);
   reader.finish();
-  const combinations = combinationsRead === null ? null : resolveCombinations(request, combinationsRead, member, base);
+  const samples = request.output?.samples ?? DEFAULT_SAMPLES;
+  const combinations = combinationsRead === null ? null : resolveCombinations(request, combinationsRead, member, samples, base);
   return {
     member,
     loads,
     loadLabels: (request.loads ?? []).map((load) => load.label),
     supportLabels: request.member.supports.map((support) => support.label),
     selfWeight: request.selfWeight ?? false,
-    samples: request.output?.samples ?? DEFAULT_SAMPLES,
+    samples,
     units,
     material,
     criteria,
@@ -118,7 +119,7 @@ export interface CheckedMember {
   readonly model: MemberModel;
   readonly analysis: MemberAnalysis;
   readonly outcome: MemberCheckOutcome;
-  /** With load combinations: every combination; model, analysis and outcome above are then the governing one's and the overall. */
+  /** With load combinations: every combination; model and analysis above are then the shown combination's, the outcome the overall one. */
   readonly combinations: CombinationsOutcome | null;
 }
 
@@ -163,13 +164,13 @@ function checkCombinationsWithSection(
     samples: check.samples,
     checks,
   });
-  const governing = outcome.results[outcome.governing] as CombinationsOutcome['results'][number];
+  const shown = outcome.results[outcome.shown] as CombinationsOutcome['results'][number];
   const notices = [...outcome.outcome.notices, ...combinations.notices];
   return {
     section,
     material,
-    model: governing.state.model,
-    analysis: governing.state.analysis,
+    model: shown.state.model,
+    analysis: shown.state.analysis,
     outcome: { ...outcome.outcome, notices },
     combinations: outcome,
   };
@@ -199,9 +200,13 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
   };
 }
 
-/** Load states one check analyses: one, or one per combination and train position searched. */
+/**
+ * The work of one check in load states: one, or one per combination and train position searched, and
+ * with a moving load one for each envelope point (about nine single-load analyses, a few load states'
+ * worth of work, counted as one to keep the count simple and on the safe side of the budget).
+ */
 export function loadStatesOf(check: NormalisedCheck): number {
-  return check.combinations?.loadStates ?? 1;
+  return check.combinations === null ? 1 : check.combinations.loadStates + check.combinations.envelopePoints;
 }
 
 /** Load states several checks share (a batch): each check takes its own from what is left, or is refused. */
@@ -213,7 +218,7 @@ export interface WorkBudget {
 function spend(budget: WorkBudget, check: NormalisedCheck): void {
   const states = loadStatesOf(check);
   if (states > budget.remaining) {
-    throw tooMuchWork([...check.base, 'combinations'], `${states} load states (combinations x train positions), but only ${budget.remaining} of the batch's ${budget.limit} are left`);
+    throw tooMuchWork([...check.base, 'combinations'], `${states} load states (combinations x train positions, and envelope points), but only ${budget.remaining} of the batch's ${budget.limit} are left`);
   }
   budget.remaining -= states;
 }

@@ -91,12 +91,15 @@ export function runMemberSizing(request: MemberSizingRequest, catalogues: Loaded
   }
   const { density } = check.material;
   // Each candidate is a whole analysis and check per load state: bound the work one request may ask for.
-  const loads = check.combinations === null ? check.loads.length : check.combinations.cases.reduce((sum, loadCase) => sum + loadCase.loads.length, 0);
+  const loads =
+    check.combinations === null
+      ? check.loads.length
+      : check.combinations.cases.reduce((sum, loadCase) => sum + loadCase.loads.length, 0) + Math.max(0, ...check.combinations.movingLoads.map((train) => train.axles.length));
   const states = loadStatesOf(check);
   const work = all.length * states * (loads + check.member.supports.length + check.member.hinges.length + 1);
   if (work > MAX_SIZING_WORK) {
     const statesText = states === 1 ? '' : ` x ${states} load states`;
-    throw invalidField(['candidates'], `${all.length} candidates${statesText} x ${loads} loads is more work than one request may ask (candidates x load states x (loads + supports + hinges + 1) <= ${MAX_SIZING_WORK}); narrow the candidates or the limits`);
+    throw invalidField(['candidates'], `${all.length} candidates${statesText} x ${loads} loads is more work than one request may ask (candidates x load states x (loads and axles + supports + hinges + 1) <= ${MAX_SIZING_WORK}); narrow the candidates or the limits`);
   }
   const excluded: { designation: string; reason: string }[] = [];
   const kept = all.filter((candidate) => {

@@ -17,6 +17,10 @@ import type { Path, QuantityReader } from './quantity-reader.js';
 
 /** Load states x (loads + axles + supports + hinges + 1): about a second of work. */
 export const MAX_COMBINATION_WORK = 1_000_000;
+/** Envelope points with a moving load: about nine single-load analyses each, half a second at this bound. */
+export const MAX_ENVELOPE_POINTS = 5001;
+/** Envelope numbers in one answer: (combinations with a moving load + 2) x envelope points, 22 numbers each. */
+export const MAX_ENVELOPE_ANSWER_POINTS = 100_000;
 
 export type ActionKind = 'load-case' | 'moving-load' | 'self-weight';
 
@@ -36,6 +40,8 @@ export interface NormalisedCombinations {
   readonly actions: readonly ActionEcho[];
   /** Sum over combinations of the train positions searched, 1 for a combination without a moving load. */
   readonly loadStates: number;
+  /** Points of each envelope when some load moves (0 otherwise): the influence lines are read at each. */
+  readonly envelopePoints: number;
   readonly notices: readonly string[];
 }
 
@@ -76,16 +82,27 @@ export function readCombinations(request: CombinationFields, reader: QuantityRea
   return { caseLoads, trains };
 }
 
+/**
+ * The travel of a train: by default the whole pass, from the front axle entering at x = 0 to the rear
+ * axle leaving at the length (positions with part of the train off the member can govern: a heavy axle
+ * alone on the span). A given travel is clipped to the positions where some axle stands on the member.
+ */
 function movingLoadModel(request: NonNullable<CombinationFields['movingLoads']>[number], read: ReadTrain, length: number, path: Path): MovingLoadModel {
+  if (request.category === 'permanent') throw invalidField([...path, 'category'], 'a moving load is a variable action: give it the category of what moves (imposed, other, ...)');
   const first = Math.min(...read.offsets);
   const last = Math.max(...read.offsets);
-  const from = read.from ?? -first;
-  const to = read.to ?? length - last;
+  if (read.from === undefined && read.to === undefined && last - first > length) {
+    throw invalidField([...path, 'axles'], `the axles span ${last - first} m, more than the member's ${length} m; give from and to, the travel of the reference point (axles off the member carry nothing)`);
+  }
+  const givenFrom = read.from ?? -last;
+  const givenTo = read.to ?? length - first;
+  if (givenFrom > givenTo) {
+    throw invalidField([...path, read.to === undefined ? 'from' : 'to'], `the travel runs from ${givenFrom} m to ${givenTo} m: from must not lie beyond to`);
+  }
+  const from = Math.max(givenFrom, -last);
+  const to = Math.min(givenTo, length - first);
   if (from > to) {
-    if (read.from === undefined && read.to === undefined) {
-      throw invalidField([...path, 'axles'], `the axles span ${last - first} m, more than the member's ${length} m, so no position holds them all; give from and to (axles off the member carry nothing)`);
-    }
-    throw invalidField([...path, read.to === undefined ? 'from' : 'to'], `the travel runs from ${from} m to ${to} m: from must not lie beyond to`);
+    throw invalidField([...path, read.from !== undefined && read.from > length - first ? 'from' : 'to'], `no axle stands on the member anywhere from ${givenFrom} m to ${givenTo} m`);
   }
   const step = read.step ?? (to > from ? (to - from) / 100 : length);
   const model: MovingLoadModel = {
@@ -96,8 +113,9 @@ function movingLoadModel(request: NonNullable<CombinationFields['movingLoads']>[
     to,
     step,
   };
-  if (gridIntervals(model) > MAX_TRAIN_INTERVALS) {
-    throw tooMuchWork([...path, 'step'], `a travel of ${to - from} m in steps of ${step} m is ${gridIntervals(model)} intervals; at most ${MAX_TRAIN_INTERVALS}`);
+  const intervals = gridIntervals(model);
+  if (!(intervals <= MAX_TRAIN_INTERVALS)) {
+    throw tooMuchWork([...path, 'step'], `a travel of ${to - from} m in steps of ${step} m is ${intervals} intervals; at most ${MAX_TRAIN_INTERVALS}`);
   }
   return model;
 }
@@ -110,6 +128,7 @@ function givenCombinations(request: CombinationFields, known: ReadonlyMap<string
     seen.add(combination.id);
     const entries = Object.entries(combination.factors);
     if (entries.length === 0) throw invalidField([...path, 'factors'], 'names no action: give a factor for at least one load case or moving load');
+    if (entries.every(([, factor]) => factor === 0)) throw invalidField([...path, 'factors'], 'every factor is 0: the combination carries no load');
     for (const [id] of entries) {
       if (!known.has(id)) {
         const ids = [...known.keys()].map((name) => `"${name}"`).join(', ');
@@ -130,7 +149,7 @@ function givenCombinations(request: CombinationFields, known: ReadonlyMap<string
 }
 
 /** The checks and defaults that need the member length; throws one problem for the first fault. */
-export function resolveCombinations(request: CombinationFields, read: ReadCombinations, member: NormalisedMember, base: Path): NormalisedCombinations {
+export function resolveCombinations(request: CombinationFields, read: ReadCombinations, member: NormalisedMember, samples: number, base: Path): NormalisedCombinations {
   if ((request.loads ?? []).length > 0) {
     throw invalidField([...base, 'loads'], 'must be empty when loads come in loadCases or movingLoads: put these loads in a load case so their category and factors are stated');
   }
@@ -190,5 +209,17 @@ export function resolveCombinations(request: CombinationFields, read: ReadCombin
   if (work > MAX_COMBINATION_WORK) {
     throw tooMuchWork([...base, 'loadCases'], `${loadStates} load states x ${totalLoads + axles + member.supports.length + member.hinges.length + 1} loads, axles, supports and hinges is ${work}; at most ${MAX_COMBINATION_WORK}`);
   }
-  return { cases, movingLoads, combinations, set: given ? 'given' : 'default', actions, loadStates, notices };
+  // A moving load's envelope: influence lines read at every envelope point (about nine single-load
+  // analyses a point) and one envelope a combination that moves a train, two for the purposes.
+  const caseNodes = read.caseLoads.reduce((sum, loads) => sum + loads.reduce((n, load) => n + (load.kind === 'point' ? 1 : 2), 0), 0);
+  const envelopePoints = movingLoads.length === 0 ? 0 : samples + 2 * (member.supports.length + member.hinges.length + caseNodes) + 2;
+  if (envelopePoints > MAX_ENVELOPE_POINTS) {
+    throw tooMuchWork([...base, 'output', 'samples'], `with moving loads the envelope holds samples + 2 a node = ${envelopePoints} points; at most ${MAX_ENVELOPE_POINTS}: fewer samples`);
+  }
+  const movingCombinations = combinations.filter((combination) => movingLoads.some((train) => (combination.factors.get(train.id) ?? 0) !== 0)).length;
+  const answerPoints = (movingCombinations + 2) * envelopePoints;
+  if (answerPoints > MAX_ENVELOPE_ANSWER_POINTS) {
+    throw tooMuchWork([...base, 'output', 'samples'], `${movingCombinations} combinations with a moving load and the two purposes make ${answerPoints} envelope points in the answer; at most ${MAX_ENVELOPE_ANSWER_POINTS}: fewer samples or combinations`);
+  }
+  return { cases, movingLoads, combinations, set: given ? 'given' : 'default', actions, loadStates, envelopePoints, notices };
 }

@@ -47,16 +47,16 @@ const axleInput = z
 export const movingLoadInput = z
   .strictObject({
     id: actionId,
-    category,
+    category: category.openapi({ description: 'What moves: imposed, snow, wind, accidental or other (a moving load is never permanent). Decides its factors in the default combinations.' }),
     description: z.string().max(200).optional().openapi({ description: 'What moves, in words; echoed.' }),
     axles: z.array(axleInput).min(1).max(MAX_AXLES).openapi({ description: `1 to ${MAX_AXLES} axles at fixed spacing.` }),
-    from: quantity('length', 'First position of the reference point; default: the first axle on the start of the member.').optional(),
-    to: quantity('length', 'Last position of the reference point; default: the last axle on the end of the member.').optional(),
-    step: quantity('length', `Largest spacing of the positions searched; default (to - from) / 100. At most ${MAX_TRAIN_INTERVALS} intervals.`).optional(),
+    from: quantity('length', 'First position of the reference point; default: the whole pass, from the front axle (largest offset) on x = 0. A travel given is cut to the positions where some axle stands on the member.').optional(),
+    to: quantity('length', 'Last position of the reference point; default: the rear axle (smallest offset) on the end of the member.').optional(),
+    step: quantity('length', `Largest spacing of the grid of positions checked; default a hundredth of the travel (after cutting). At most ${MAX_TRAIN_INTERVALS} intervals.`).optional(),
   })
   .openapi('MovingLoad', {
     description:
-      'A train of point loads of fixed spacing that travels along the member: a trolley, a hoist, a pallet truck. Every position from `from` to `to` is searched (a grid no coarser than step, every position that puts an axle on a support, hinge or load point), then refined to the exact worst position. An axle off the member carries nothing.',
+      'A train of point loads of fixed spacing that travels along the member: a trolley, a hoist, a pallet truck. The checks are made on a grid no coarser than step, wherever an axle stands on an end, support or hinge and a hair to either side, and where each diagram peaks; the governing utilization and the extremes of every diagram are refined by Brent\'s method. The envelopes (diagrams and reactions) are exact over the whole travel. An axle off the member carries nothing. A train longer than the member needs from and to.',
   });
 
 export const combinationInput = z

@@ -58,7 +58,26 @@ const reactionEnvelope = z
       .object(Object.fromEntries(REACTION_COMPONENTS.map((component) => [component, reactionBound.openapi({ description: `Smallest ${component} and the train position.` })])) as Record<string, typeof reactionBound>)
       .openapi({ description: 'Smallest value of each component.' }),
   })
-  .openapi('ReactionEnvelope', { description: 'Largest and smallest value of each reaction component over the train positions searched (exact on a statically determinate member, where the largest values come with an axle on a node).' });
+  .openapi('ReactionEnvelope', { description: 'Largest and smallest value of each reaction component over the whole travel, exact (from the influence lines), with the train position; a value approached as an axle nears a support is given at the support.' });
+
+const combinedBound = z.object({
+  value: z.number().openapi({ description: 'In the force or moment unit.' }),
+  combination: z.string().openapi({ description: 'The combination that gives it.' }),
+  loadPosition: presentedQuantity('length', "Where the train's reference point stands, when the combination moves one.").optional(),
+});
+
+const combinedReactionEnvelope = z
+  .object({
+    label: z.string().optional(),
+    position: presentedQuantity('length', 'Position of the support.'),
+    max: z
+      .object(Object.fromEntries(REACTION_COMPONENTS.map((component) => [component, combinedBound.openapi({ description: `Largest ${component}, its combination and train position.` })])) as Record<string, typeof combinedBound>)
+      .openapi({ description: 'Largest value of each component.' }),
+    min: z
+      .object(Object.fromEntries(REACTION_COMPONENTS.map((component) => [component, combinedBound.openapi({ description: `Smallest ${component}, its combination and train position.` })])) as Record<string, typeof combinedBound>)
+      .openapi({ description: 'Smallest value of each component.' }),
+  })
+  .openapi('CombinedReactionEnvelope', { description: 'A support\'s reactions at their extremes over the combinations.' });
 
 const combinationOutput = z
   .object({
@@ -72,8 +91,8 @@ const combinationOutput = z
       .object({
         id: z.string().openapi({ description: 'The moving load.' }),
         factor: z.number().openapi({ description: 'Its factor in this combination.' }),
-        loadPosition: presentedQuantity('length', "The governing position of the train's reference point: where this combination's highest utilization occurs."),
-        positionsSearched: z.number().int().openapi({ description: 'Train positions visited on the grid and at the nodes, before the refinement.' }),
+        loadPosition: presentedQuantity('length', "The governing position of the train's reference point: where this combination's highest utilization was found."),
+        positionsSearched: z.number().int().openapi({ description: 'Train positions checked on the grid and at the nodes, before the refinement.' }),
         extremes: movingExtremes,
         reactions: z.array(reactionEnvelope).openapi({ description: 'One per support, in the order given.' }),
         envelope: diagramEnvelopeOutput,
@@ -81,7 +100,7 @@ const combinationOutput = z
       .optional()
       .openapi({ description: 'Present when the combination moves a train: the envelope over its positions.' }),
     reactions: z.array(reactionOutput).openapi({ description: 'At the governing train position when a train moves.' }),
-    checks: z.array(failureCheckOutput).openapi({ description: "The checks of the combination's purpose, at the governing train position when a train moves." }),
+    checks: z.array(failureCheckOutput).openapi({ description: "The checks of the combination's purpose, at its governing train position when a train moves (the top-level checks hold each check at its worst over every position searched)." }),
   })
   .openapi('CombinationResult');
 
@@ -89,7 +108,11 @@ export const loadCombinationsOutput = z
   .object({
     set: z.enum(['given', 'default']).openapi({ description: 'given: the combinations of the request; default: built from the categories (see basis).' }),
     basis: z.string().openapi({ description: 'How the combinations were made.' }),
-    governing: z.string().openapi({ description: 'The combination that holds the governing check; the top-level reactions, diagrams, extremes, buckling and stresses are its own (at its governing train position).' }),
+    governing: z.string().openapi({ description: 'The combination that holds the governing check.' }),
+    shown: z.string().openapi({ description: 'The combination whose reactions, diagrams, extremes, buckling and stresses are at the top (at its governing train position): the strength combination with the highest utilization, or the governing one when no combination is for strength.' }),
+    reactions: z
+      .array(combinedReactionEnvelope)
+      .openapi({ description: 'For support design: each support\'s reactions at their largest and smallest over every strength combination (over all combinations when none is for strength) and every train position, in the order given.' }),
     actions: z
       .array(
         z.object({
@@ -103,9 +126,9 @@ export const loadCombinationsOutput = z
     combinations: z.array(combinationOutput).openapi({ description: 'Every combination checked, in order.' }),
     envelope: z
       .object({ strength: diagramEnvelopeOutput.optional(), serviceability: diagramEnvelopeOutput.optional() })
-      .openapi({ description: 'The envelope of every combination of each purpose, over every train position searched.' }),
+      .openapi({ description: 'The envelope of every combination of each purpose, over every train position (exact).' }),
   })
   .optional()
   .openapi('LoadCombinationsResult', {
-    description: 'Present when the request gives loadCases, movingLoads or combinations. The top-level checks are then each check at its worst over every combination and train position (with combination and loadPosition), and governing and verdict are over all of them.',
+    description: 'Present when the request gives loadCases, movingLoads or combinations. The top-level checks are then each check at its worst over every combination and every train position checked (with combination and loadPosition), and governing and verdict are over all of them.',
   });

@@ -17,7 +17,7 @@ import { ZERO_TOLERANCE, withoutNegativeZero } from '../analysis/tolerances.js';
 import type { MemberCheckInput } from '../checks/check-input.js';
 import { checkMember } from '../checks/check-member.js';
 import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck } from '../checks/check-outcome.js';
-import type { FailureMode } from '../checks/failure-mode.js';
+import { FAILURE_MODES, type FailureMode } from '../checks/failure-mode.js';
 import { governingFailure } from '../checks/governing.js';
 import { EngineError } from '../engine-error.js';
 import type { LoadModel, MemberModel } from '../member/model.js';
@@ -26,7 +26,7 @@ import { brentMaximum } from './brent-maximum.js';
 import { combinedStaticLoads, trainLoads } from './combined-loads.js';
 import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type DiagramEnvelope, type EnvelopePositions } from './diagram-envelope.js';
 import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
-import { influenceLines, type InfluenceLines } from './influence-lines.js';
+import { FIELD_PLANE, influenceLines, type InfluenceLines } from './influence-lines.js';
 import { REACTION_COMPONENTS, trainEnvelope, type ReactionBound, type ReactionBounds, type ReactionComponent, type TrainEnvelope } from './train-envelope.js';
 import { superposedFieldExtremes } from './superposed-extremes.js';
 import { trainPositions } from './train-positions.js';
@@ -93,8 +93,12 @@ export interface CombinationsOutcome {
   readonly results: readonly CombinationResult[];
   /** Index into results of the combination that holds the governing check. */
   readonly governing: number;
+  /** Index into results of the combination whose state is shown at the top: the strength combination with the highest utilization, else the governing one. */
+  readonly shown: number;
+  /** Each support's reactions at their extremes over the strength combinations (all, when none is for strength). */
+  readonly reactions: readonly CombinedReactionEnvelope[];
   readonly worstChecks: readonly WorstCheck[];
-  /** Every check at its worst, the governing one, the verdict; buckling, stresses and criteria of the governing combination. */
+  /** Every check at its worst, the governing one, the verdict; buckling, stresses and criteria of the shown combination. */
   readonly outcome: MemberCheckOutcome;
   readonly envelopes: Readonly<Record<CombinationPurpose, DiagramEnvelope | null>>;
   readonly envelopePositions: EnvelopePositions;
@@ -159,11 +163,9 @@ function fixedNodesOf(member: Omit<MemberModel, 'loads'>, cases: readonly LoadCa
   return nodes;
 }
 
-/** The identity of a check across load states: its mode and formula, or for per-span checks its mode and where it lies. */
+/** The identity of a check across load states: its mode, and for per-span, per-segment and per-support checks where it lies (a check without demand has no place and joins its mode). */
 function checkKey(check: FailureCheck): string {
-  if (LOCATED_MODES.includes(check.mode)) return `${check.mode}|${check.location ?? ''}`;
-  // The formula without the numbers it quotes (a moment-gradient factor, a slenderness) that change with the loads.
-  return `${check.mode}|${check.basis.replace(/\d[\d.]*(e[-+]?\d+)?/gi, '#')}`;
+  return LOCATED_MODES.includes(check.mode) && check.location !== null ? `${check.mode}|${check.location}` : check.mode;
 }
 
 class WorstChecks {
@@ -177,8 +179,11 @@ class WorstChecks {
     }
   }
 
+  /** Every check at its worst; a check without demand only where its mode has no other entry. */
   all(): WorstCheck[] {
-    return [...this.byKey.values()];
+    const entries = [...this.byKey.values()];
+    const withDemand = new Set(entries.filter((entry) => entry.check.utilization > 0).map((entry) => entry.check.mode));
+    return entries.filter((entry) => entry.check.utilization > 0 || !withDemand.has(entry.check.mode));
   }
 }
 
@@ -282,8 +287,7 @@ function checkMovingCombination(
     }
   }
   const tolerance = REFINEMENT_TOLERANCE * length;
-  const governing = refinedMaximum(trainAt, utilization, (p) => stateAt(p).outcome.governing?.utilization ?? 0, tolerance);
-  const state = stateAt(governing.position);
+  const refinedGoverning = refinedMaximum(trainAt, utilization, (p) => stateAt(p).outcome.governing?.utilization ?? 0, tolerance);
 
   // A diagram's extremes at many train positions: the fixed loads analysed once, the train alone at
   // each position, the two superposed (see superposed-extremes.ts).
@@ -299,18 +303,36 @@ function checkMovingCombination(
   };
   const extremes = {} as Record<DiagramField, { max: MovingExtreme; min: MovingExtreme }>;
   for (const field of DIAGRAM_FIELDS) {
-    const identicallyZero = fieldMax[field].every((value) => value === 0) && fieldMin[field].every((value) => value === 0);
+    const plane = FIELD_PLANE[field];
+    // A diagram no axle force reaches does not change with the train's position: the grid's value is exact.
+    const reached = plane !== null && moving.train.axles.some((axle) => (plane === 'y' ? axle.fy : axle.fz) !== 0);
     const extremeAt = (p: number, side: 'max' | 'min'): MovingExtreme => {
       const extreme = superposedFieldExtremes(fixed, trainAnalysisAt(p), moving.factor, field)[side];
       return { value: extreme.value, position: extreme.position, loadPosition: p };
     };
     const refine = (side: 'max' | 'min', values: readonly number[]): MovingExtreme => {
       const sign = side === 'max' ? 1 : -1;
-      const best = identicallyZero ? { position: trainAt[0] as number, value: 0 } : refinedMaximum(trainAt, values, (p) => sign * extremeAt(p, side).value, tolerance, 1);
+      const best = reached ? refinedMaximum(trainAt, values, (p) => sign * extremeAt(p, side).value, tolerance, 1) : { position: trainAt[0] as number, value: 0 };
       return extremeAt(best.position, side);
     };
     extremes[field] = { max: refine('max', fieldMax[field]), min: refine('min', fieldMin[field]) };
   }
+  // Each check is checked where the diagram it measures peaks (bending where the moment does, shear
+  // where the shear does, deflection where the deflection does), besides the grid: the governing state
+  // is the worst of all of them.
+  const candidates = new Set<number>([refinedGoverning.position]);
+  for (const field of DIAGRAM_FIELDS) {
+    if (FIELD_PLANE[field] === null) continue;
+    candidates.add(extremes[field].max.loadPosition);
+    candidates.add(extremes[field].min.loadPosition);
+  }
+  let governing = { position: refinedGoverning.position, state: stateAt(refinedGoverning.position) };
+  for (const p of candidates) {
+    if (p === refinedGoverning.position) continue;
+    const candidate = stateAt(p);
+    if ((candidate.outcome.governing?.utilization ?? 0) > (governing.state.outcome.governing?.utilization ?? 0)) governing = { position: p, state: candidate };
+  }
+  const { state } = governing;
   const train = trainEnvelopeOf(moving.train);
   const envelope = emptyEnvelope(positions);
   widenEnvelope(envelope, positions, fixed);
@@ -342,7 +364,44 @@ function roundEnvelope(envelope: DiagramEnvelope): DiagramEnvelope {
   return envelope;
 }
 
-function aggregateOutcome(results: readonly CombinationResult[], worstChecks: readonly WorstCheck[]): { outcome: MemberCheckOutcome; governing: number } {
+/** A reaction component at its largest or smallest over the combinations, and where that was. */
+export interface CombinedReactionBound {
+  readonly value: number;
+  readonly combination: string;
+  readonly loadPosition: number | null;
+}
+
+export interface CombinedReactionEnvelope {
+  readonly position: number;
+  readonly max: Readonly<Record<ReactionComponent, CombinedReactionBound>>;
+  readonly min: Readonly<Record<ReactionComponent, CombinedReactionBound>>;
+}
+
+/** Each support's reactions at their largest and smallest over the strength combinations (over all of them when none is for strength). */
+function reactionsOverCombinations(results: readonly CombinationResult[]): CombinedReactionEnvelope[] {
+  const strength = results.filter((result) => result.combination.purpose === 'strength');
+  const over = strength.length > 0 ? strength : results;
+  const first = over[0] as CombinationResult;
+  return first.state.analysis.reactions.map((reaction, s) => {
+    const max = {} as Record<ReactionComponent, CombinedReactionBound>;
+    const min = {} as Record<ReactionComponent, CombinedReactionBound>;
+    for (const component of REACTION_COMPONENTS) {
+      for (const result of over) {
+        const id = result.combination.id;
+        const moving = result.movingLoad?.reactions[s];
+        const high = moving === undefined ? { value: (result.state.analysis.reactions[s] as typeof reaction)[component], combination: id, loadPosition: null } : { value: moving.max[component].value, combination: id, loadPosition: moving.max[component].loadPosition };
+        const low = moving === undefined ? { ...high } : { value: moving.min[component].value, combination: id, loadPosition: moving.min[component].loadPosition };
+        if (max[component] === undefined || high.value > max[component].value) max[component] = high;
+        if (min[component] === undefined || low.value < min[component].value) min[component] = low;
+      }
+    }
+    return { position: reaction.position, max, min };
+  });
+}
+
+const STRENGTH_MODES = FAILURE_MODES.filter((mode) => !SERVICEABILITY_MODES.includes(mode));
+
+function aggregateOutcome(results: readonly CombinationResult[], worstChecks: readonly WorstCheck[]): { outcome: MemberCheckOutcome; governing: number; shown: number } {
   const checks = worstChecks.map((entry) => entry.check);
   const governingCheck = governingFailure(checks);
   let governing = 0;
@@ -357,6 +416,15 @@ function aggregateOutcome(results: readonly CombinationResult[], worstChecks: re
     );
     governing = Math.max(0, results.findIndex((result) => result.combination.id === entry?.combination));
   }
+  // The state shown at the top: the strength combination with the highest utilization (the stresses,
+  // reactions and buckling of a serviceability combination would understate them), else the governing one.
+  let shown = -1;
+  results.forEach((result, i) => {
+    if (result.combination.purpose !== 'strength') return;
+    const utilization = result.state.outcome.governing?.utilization ?? 0;
+    if (shown < 0 || utilization > ((results[shown] as CombinationResult).state.outcome.governing?.utilization ?? 0)) shown = i;
+  });
+  if (shown < 0) shown = governing;
   const checked = new Set(checks.map((check) => check.mode));
   const notApplicable: NotApplicableCheck[] = [];
   const seenModes = new Set<FailureMode>();
@@ -374,9 +442,19 @@ function aggregateOutcome(results: readonly CombinationResult[], worstChecks: re
       notices.push(notice);
     }
   }
-  const base = (results[governing] as CombinationResult).state.outcome;
+  // A purpose no combination serves leaves its modes unchecked: say so rather than let them vanish.
+  for (const [purpose, modes] of [['strength', STRENGTH_MODES], ['serviceability', SERVICEABILITY_MODES]] as const) {
+    if (results.some((result) => result.combination.purpose === purpose)) continue;
+    for (const mode of modes) {
+      if (checked.has(mode) || seenModes.has(mode)) continue;
+      notApplicable.push({ mode, reason: `no ${purpose} combination was given, so this mode was not checked` });
+    }
+    notices.push(`No ${purpose} combination was given: the ${purpose === 'strength' ? 'strength and stability' : 'deflection and twist'} checks were not made.`);
+  }
+  const base = (results[shown] as CombinationResult).state.outcome;
   return {
     governing,
+    shown,
     outcome: {
       checks,
       notApplicable,
@@ -426,7 +504,7 @@ export function checkCombinations(input: CombinationsInput): CombinationsOutcome
   }
   for (const envelope of Object.values(envelopes)) if (envelope !== null) roundEnvelope(envelope);
   const worstChecks = worst.all();
-  const { outcome, governing } = aggregateOutcome(results, worstChecks);
-  return { results, governing, worstChecks, outcome, envelopes, envelopePositions: positions };
+  const { outcome, governing, shown } = aggregateOutcome(results, worstChecks);
+  return { results, governing, shown, worstChecks, outcome, envelopes, envelopePositions: positions, reactions: reactionsOverCombinations(results) };
 }
 

@@ -133,6 +133,66 @@ describe('load combinations', () => {
   });
 });
 
+describe('moving loads: the whole pass and every check at its worst', () => {
+  const span = {
+    ...beam,
+    member: { length: 6, supports: [{ position: 0, type: 'pinned' }, { position: 6, type: 'roller' }] },
+    section: { designation: 'IPE 300' },
+    lateralTorsional: { braced: true },
+  };
+  // A 100 kN wheel with a 10 kN wheel 5 m behind it: alone at midspan the heavy wheel gives P L / 4 =
+  // 150 kN*m, more than any position with both wheels on the span (AISC Manual, beam diagrams, case 7).
+  const lorry = { id: 'lorry', category: 'imposed', axles: [{ offset: 0, fy: -100000 }, { offset: 5, fy: -10000 }] };
+
+  it('searches the whole pass by default, the train entering and leaving the member', async () => {
+    const response = await post({ ...span, movingLoads: [lorry] });
+    expect(response.status).toBe(200);
+    const moving = response.body.loadCombinations.combinations[0].movingLoad;
+    expect(moving.extremes.momentZ.max.value).toBeCloseTo(150000, 4);
+    expect(moving.extremes.momentZ.max.position).toBeCloseTo(3, 6);
+    // A travel given far beyond the member is cut to where an axle stands on it: the same answer.
+    const wide = await post({ ...span, movingLoads: [{ ...lorry, from: -700, to: 700 }] });
+    expect(wide.status).toBe(200);
+    expect(wide.body.governing.utilization).toBeCloseTo(response.body.governing.utilization, 9);
+    expect(wide.body.loadCombinations.combinations[0].movingLoad.extremes.momentZ.max.value).toBeCloseTo(150000, 4);
+  });
+
+  it('finds the shear check at its worst with a wheel just off a support, although bending governs', async () => {
+    // One 50 kN wheel: the end shear tends to 50 kN as the wheel nears the support.
+    const response = await post({ ...span, movingLoads: [{ id: 'wheel', category: 'imposed', axles: [{ offset: 0, fy: -50000 }], step: 1.5 }] });
+    const shear = (response.body.checks as Check[]).find((check) => check.mode === 'shear')!;
+    const single = await post({ ...span, loads: [{ type: 'point', position: 1e-6, fy: -50000 }] });
+    const shearThere = (single.body.checks as Check[]).find((check) => check.mode === 'shear')!;
+    expect(shear.utilization).toBeCloseTo(shearThere.utilization, 5);
+    // One entry a mode: the checks without demand at some positions do not come back beside it.
+    const modes = (response.body.checks as Check[]).map((check) => check.mode);
+    expect(new Set(modes).size).toBe(modes.length);
+  });
+
+  it('shows the strength state at the top when a serviceability combination governs, and says what was not checked', async () => {
+    const response = await post({
+      ...span,
+      member: { length: 9, supports: [{ position: 0, type: 'pinned' }, { position: 9, type: 'roller' }] },
+      loadCases: cases,
+      combinations: [
+        { id: 'factored', purpose: 'strength', factors: { grating: 1.35, goods: 1.5 } },
+        { id: 'characteristic', purpose: 'serviceability', factors: { grating: 1, goods: 1 } },
+      ],
+      criteria: { deflectionLimitRatio: 1000 },
+    });
+    expect(response.status).toBe(200);
+    expect(response.body.loadCombinations.governing).toBe('characteristic');
+    expect(response.body.loadCombinations.shown).toBe('factored');
+    // The reactions at the top are the factored ones: 1.35 x 1.2 kN/m x 3.6 m x 7.2 / 9 + 1.5 x 8 kN x 7.8 / 9 at x = 0.
+    expect(response.body.reactions[0].fy).toBeCloseTo((1.35 * 1200 * 3.6 * 7.2) / 9 + (1.5 * 8000 * 7.8) / 9, 6);
+    expect(response.body.loadCombinations.reactions[0].max.fy.combination).toBe('factored');
+    const onlyStrength = await post({ ...span, loadCases: cases, combinations: [{ id: 'factored', purpose: 'strength', factors: { grating: 1.35, goods: 1.5 } }] });
+    const reasons = onlyStrength.body.notApplicable as { mode: string; reason: string }[];
+    expect(reasons.find((reason) => reason.mode === 'deflection')?.reason).toMatch(/no serviceability combination/);
+    expect(onlyStrength.body.notices.some((notice: string) => notice.startsWith('No serviceability combination was given'))).toBe(true);
+  });
+});
+
 describe('bad load combinations', () => {
   const expectProblem = async (body: object, status: number, pointer: string) => {
     const response = await post({ ...beam, ...body });
@@ -147,6 +207,10 @@ describe('bad load combinations', () => {
     expect(body.detail).toMatch(/"grating", "goods"/);
   });
   it('refuses an empty combination', () => expectProblem({ loadCases: cases, combinations: [{ id: 'c', purpose: 'strength', factors: {} }] }, 400, '/combinations/0/factors'));
+  it('refuses a moving load that is permanent', () => expectProblem({ movingLoads: [{ id: 't', category: 'permanent', axles: [{ offset: 0, fy: -1 }] }] }, 400, '/movingLoads/0/category'));
+  it('refuses a combination whose factors are all 0', () => expectProblem({ loadCases: cases, combinations: [{ id: 'c', purpose: 'strength', factors: { grating: 0 } }] }, 400, '/combinations/0/factors'));
+  it('refuses a travel on which no axle ever stands on the member', () =>
+    expectProblem({ movingLoads: [{ id: 't', category: 'imposed', axles: [{ offset: 0, fy: -1 }], from: 5, to: 9 }] }, 400, '/movingLoads/0/from'));
   it('refuses a train longer than the member with no range', () =>
     expectProblem({ movingLoads: [{ id: 't', category: 'imposed', axles: [{ offset: 0, fy: -1000 }, { offset: 4, fy: -1000 }] }] }, 400, '/movingLoads/0/axles'));
   it('accepts that train with a range, axles off the member carrying nothing', async () => {
@@ -191,9 +255,16 @@ describe('limits on load combinations', () => {
     expect(response.body.type).toBe(PROBLEMS.tooMuchWork.type);
     expect(response.body.detail).toContain(String(MAX_LOAD_STATES));
   });
+  it('refuses more envelope points than a moving load may have, naming output.samples', async () => {
+    const response = await post({ ...beam, movingLoads: [{ id: 't', category: 'imposed', axles: [{ offset: 0, fy: -1 }] }], output: { samples: 5001 } });
+    expect(response.status).toBe(422);
+    expect(response.body.type).toBe(PROBLEMS.tooMuchWork.type);
+    expect(response.body.errors[0].pointer).toBe('/output/samples');
+    expect(response.body.detail).toContain('5001');
+  });
   it(`shares ${MAX_BATCH_LOAD_STATES} load states among the items of a batch: an item beyond is a 422 of its own`, async () => {
     const item = { ...beam, movingLoads: [{ id: 't', category: 'imposed', axles: [{ offset: 0, fy: -1 }], step: 0.0036 }], combinations: Array.from({ length: 9 }, (_, i) => ({ id: `c${i}`, purpose: 'strength', factors: { t: 1 } })) };
-    // 9 combinations x 1,001 positions = 9,009 load states an item: two fit in 20,000, the third does not.
+    // 9 combinations x 1,001 positions + 11 envelope points = 9,020 load states an item: two fit in 20,000, the third does not.
     const response = await request(app.server).post('/v1/member-checks/batch').send({ items: [item, item, item, beam] });
     expect(response.status).toBe(200);
     expect(response.body.results.map((r: { status: number }) => r.status)).toEqual([200, 200, 422, 200]);

@@ -51,4 +51,24 @@ describe('defaultCombinations', () => {
       ]),
     ).toEqual(['strength-1: 1 G', 'strength-2: 1 G + 1 impact', 'serviceability-1: 1 G']);
   });
+  it('takes wind directions one at a time and keeps a reduced imposed load beside an accidental action', () => {
+    expect(
+      written([
+        { id: 'G', category: 'permanent', moving: false },
+        { id: 'goods', category: 'imposed', moving: false },
+        { id: 'wind +y', category: 'wind', moving: false },
+        { id: 'wind -y', category: 'wind', moving: false },
+        { id: 'forklift impact', category: 'accidental', moving: false },
+      ]).filter((line) => !/: 1 G \+ 1 (goods|wind [+-]y)$/.test(line)),
+    ).toEqual([
+      'strength-1: 1 G',
+      'strength-5: 1 G + 0.75 goods + 0.75 wind +y',
+      'strength-6: 1 G + 0.75 goods + 0.75 wind -y',
+      'strength-7: 0.6 G + 1 wind +y',
+      'strength-8: 0.6 G + 1 wind -y',
+      'strength-9: 1 G + 1 forklift impact + 0.5 goods',
+      'serviceability-4: 1 G + 1 goods + 1 wind +y',
+      'serviceability-5: 1 G + 1 goods + 1 wind -y',
+    ]);
+  });
 });

@@ -7,7 +7,7 @@ import type { DiagramEnvelope } from '../../engine/combinations/diagram-envelope
 import type { NormalisedCombinations } from '../normalise/load-combinations.js';
 import { present, type OutputUnits } from '../output-units.js';
 import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
-import { presentReactions } from './analysis.js';
+import { presentExtremes, presentReactions } from './analysis.js';
 import { presentCheckList, presentGoverning } from './checks.js';
 
 const REACTION_KIND: Record<ReactionComponent, 'force' | 'moment'> = { fx: 'force', fy: 'force', fz: 'force', mx: 'moment', my: 'moment', mz: 'moment' };
@@ -104,6 +104,7 @@ export function presentLoadCombinations(normalised: NormalisedCombinations, outc
                 envelope: presentEnvelope(result.envelope as DiagramEnvelope, units),
               },
         reactions: presentReactions(state.analysis, labels, units),
+        extremes: presentExtremes(state.analysis, units),
         checks: presentCheckList(state.outcome.checks, units),
       };
     }),

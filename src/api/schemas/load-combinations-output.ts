@@ -2,7 +2,7 @@
 
 import { ACTION_CATEGORIES } from '../../engine/combinations/load-actions.js';
 import { REACTION_COMPONENTS } from '../../engine/combinations/train-envelope.js';
-import { DIAGRAM_FIELD_INFO, reactionOutput } from './analysis-output.js';
+import { DIAGRAM_FIELD_INFO, extremesOutput, reactionOutput } from './analysis-output.js';
 import { failureCheckOutput, governingOutput } from './check-output.js';
 import { presentedQuantity } from './quantity.js';
 import { z } from './zod.js';
@@ -100,6 +100,7 @@ const combinationOutput = z
       .optional()
       .openapi({ description: 'Present when the combination moves a train: the envelope over its positions.' }),
     reactions: z.array(reactionOutput).openapi({ description: 'At the governing train position when a train moves.' }),
+    extremes: extremesOutput.openapi({ description: "Each diagram's exact extremes, at the governing train position when a train moves (movingLoad.extremes holds them over every position)." }),
     checks: z.array(failureCheckOutput).openapi({ description: "The checks of the combination's purpose, at its governing train position when a train moves (the top-level checks hold each check at its worst over every position searched)." }),
   })
   .openapi('CombinationResult');

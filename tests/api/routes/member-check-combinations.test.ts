@@ -38,7 +38,7 @@ const cases = [
 ];
 
 type Check = { mode: string; utilization: number; demand: number; combination?: string; loadPosition?: number; location?: string };
-type Combination = { id: string; purpose: string; checks: Check[]; reactions: { fy: number }[]; governing?: { utilization: number }; movingLoad?: { loadPosition: number } };
+type Combination = { id: string; purpose: string; checks: Check[]; reactions: { fy: number }[]; extremes: Record<string, unknown>; governing?: { utilization: number }; movingLoad?: { loadPosition: number } };
 
 describe('load combinations', () => {
   it('checks each given combination as the single check of its factored loads (superposition)', async () => {
@@ -59,6 +59,7 @@ describe('load combinations', () => {
     expect(combinations[0]!.checks.map((check) => check.mode)).toEqual(strengthModes.map((check) => check.mode));
     combinations[0]!.checks.forEach((check, i) => expect(check.utilization).toBeCloseTo(strengthModes[i]!.utilization, 12));
     expect(combinations[0]!.reactions.map((r) => r.fy)).toEqual(heavy.body.reactions.map((r: { fy: number }) => r.fy));
+    expect(combinations[0]!.extremes).toEqual(heavy.body.extremes);
     const deflection = (goodsOnly.body.checks as Check[]).find((check) => check.mode === 'deflection')!;
     expect(combinations[1]!.checks.map((check) => check.mode)).toEqual(['deflection', 'twist']);
     expect(combinations[1]!.checks[0]!.utilization).toBeCloseTo(deflection.utilization, 12);

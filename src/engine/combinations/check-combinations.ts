@@ -28,7 +28,7 @@ import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type Di
 import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
 import { FIELD_PLANE, influenceLines, type InfluenceLines } from './influence-lines.js';
 import { REACTION_COMPONENTS, trainEnvelope, type ReactionBound, type ReactionBounds, type ReactionComponent, type TrainEnvelope } from './train-envelope.js';
-import { superposedFieldExtremes } from './superposed-extremes.js';
+import { superposedFieldExtremes } from './superposition.js';
 import { trainPositions } from './train-positions.js';
 
 export interface CombinationsInput {
@@ -269,6 +269,19 @@ function checkMovingCombination(
   const { length } = member;
   const staticLoads = combinedStaticLoads(input.cases, combination);
   const loadsAt = (p: number): LoadModel[] => [...staticLoads, ...trainLoads(moving.train, p, moving.factor, length)];
+  // A diagram's extremes at many train positions: the fixed loads solved once, the train alone (a few
+  // point loads) at each position, the two superposed (see superposition.ts). (Superposing whole
+  // analyses for the checks was measured no faster than solving: merging the pieces costs what solving does.)
+  const fixed = analyseMember({ ...member, loads: staticLoads });
+  const trainAnalyses = new Map<number, MemberAnalysis>();
+  const trainAnalysisAt = (p: number): MemberAnalysis => {
+    let known = trainAnalyses.get(p);
+    if (known === undefined) {
+      known = analyseMember({ ...member, loads: trainLoads(moving.train, p, 1, length) });
+      trainAnalyses.set(p, known);
+    }
+    return known;
+  };
   const stateAt = (p: number): LoadState => {
     const state = evaluateState(member, loadsAt(p), input, combination.purpose);
     worst.note(state.outcome, combination.id, p);
@@ -289,18 +302,6 @@ function checkMovingCombination(
   const tolerance = REFINEMENT_TOLERANCE * length;
   const refinedGoverning = refinedMaximum(trainAt, utilization, (p) => stateAt(p).outcome.governing?.utilization ?? 0, tolerance);
 
-  // A diagram's extremes at many train positions: the fixed loads analysed once, the train alone at
-  // each position, the two superposed (see superposed-extremes.ts).
-  const fixed = analyseMember({ ...member, loads: staticLoads });
-  const trainAnalyses = new Map<number, MemberAnalysis>();
-  const trainAnalysisAt = (p: number): MemberAnalysis => {
-    let known = trainAnalyses.get(p);
-    if (known === undefined) {
-      known = analyseMember({ ...member, loads: trainLoads(moving.train, p, 1, length) });
-      trainAnalyses.set(p, known);
-    }
-    return known;
-  };
   const extremes = {} as Record<DiagramField, { max: MovingExtreme; min: MovingExtreme }>;
   for (const field of DIAGRAM_FIELDS) {
     const plane = FIELD_PLANE[field];

@@ -4,7 +4,7 @@ import { analyseMember } from '../../../src/engine/analysis/analyse-member.js';
 import { evaluatePolynomial } from '../../../src/engine/analysis/polynomial.js';
 import { DIAGRAM_FIELDS } from '../../../src/engine/analysis/result.js';
 import { trainLoads } from '../../../src/engine/combinations/combined-loads.js';
-import { shiftedPolynomial, superposedFieldExtremes } from '../../../src/engine/combinations/superposed-extremes.js';
+import { shiftedPolynomial, superposedFieldExtremes } from '../../../src/engine/combinations/superposition.js';
 import { distributedLoad, memberModel, pinnedAt, pointLoad, rollerAt } from '../member/model-builders.js';
 
 describe('shiftedPolynomial', () => {
@@ -40,3 +40,4 @@ describe('superposedFieldExtremes', () => {
     );
   });
 });
+

@@ -3,8 +3,6 @@
  * handbook table and case) through the engine and through POST /v1/member-checks.
  */
 
-import { readdirSync, readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -12,9 +10,9 @@ import { checkRequest } from '../../src/api/member-check.js';
 import { memberCheckRequest } from '../../src/api/schemas/member-check-request.js';
 import { fieldAt } from '../../src/engine/analysis/field-values.js';
 import type { DiagramField, MemberAnalysis } from '../../src/engine/analysis/result.js';
+import { COMPONENT_KIND, FIELD_KIND, readReferenceCases, type Component, type Kind } from '../support/reference-cases.js';
 import { embeddedCatalogues, testApp } from '../support/test-app.js';
 
-type Component = 'fx' | 'fy' | 'fz' | 'mx' | 'my' | 'mz';
 interface ExpectedExtreme {
   value: number;
   position?: number;
@@ -32,27 +30,8 @@ interface ReferenceCase {
   };
 }
 
-const folder = fileURLToPath(new URL('./beam-diagrams/', import.meta.url));
-const cases = readdirSync(folder)
-  .filter((name) => name.endsWith('.json'))
-  .sort()
-  .map((file) => ({ file, reference: JSON.parse(readFileSync(folder + file, 'utf8')) as ReferenceCase }));
+const cases = readReferenceCases<ReferenceCase>('beam-diagrams', import.meta.url);
 
-type Kind = 'force' | 'moment' | 'length' | 'rotation';
-const FIELD_KIND: Record<DiagramField, Kind> = {
-  axial: 'force',
-  shearY: 'force',
-  shearZ: 'force',
-  momentZ: 'moment',
-  momentY: 'moment',
-  torque: 'moment',
-  deflectionY: 'length',
-  deflectionZ: 'length',
-  slopeZ: 'rotation',
-  slopeY: 'rotation',
-  twist: 'rotation',
-};
-const COMPONENT_KIND: Record<Component, Kind> = { fx: 'force', fy: 'force', fz: 'force', mx: 'moment', my: 'moment', mz: 'moment' };
 
 /** The comparison scales of tests/reference/README.md: by kind, from the case's own expected numbers. */
 function scales(reference: ReferenceCase): Record<Kind, number> {

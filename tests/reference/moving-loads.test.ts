@@ -5,17 +5,15 @@
  * The format and the comparison rule are in tests/reference/README.md.
  */
 
-import { readdirSync, readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkRequest } from '../../src/api/member-check.js';
 import { memberCheckRequest } from '../../src/api/schemas/member-check-request.js';
 import type { DiagramField } from '../../src/engine/analysis/result.js';
+import { COMPONENT_KIND, FIELD_KIND, readReferenceCases, type Component, type Kind } from '../support/reference-cases.js';
 import { embeddedCatalogues, testApp } from '../support/test-app.js';
 
-type Component = 'fx' | 'fy' | 'fz' | 'mx' | 'my' | 'mz';
 type End = 'max' | 'min';
 /** One place where an extreme is reached; an extreme reached at several equally correct places lists each. */
 interface Location {
@@ -47,27 +45,8 @@ interface MovingLoadView {
   reactions: readonly Record<End, Record<Component, { value: number; loadPosition: number }>>[];
 }
 
-const folder = fileURLToPath(new URL('./moving-loads/', import.meta.url));
-const cases = readdirSync(folder)
-  .filter((name) => name.endsWith('.json'))
-  .sort()
-  .map((file) => ({ file, reference: JSON.parse(readFileSync(folder + file, 'utf8')) as ReferenceCase }));
+const cases = readReferenceCases<ReferenceCase>('moving-loads', import.meta.url);
 
-type Kind = 'force' | 'moment' | 'length' | 'rotation';
-const FIELD_KIND: Record<DiagramField, Kind> = {
-  axial: 'force',
-  shearY: 'force',
-  shearZ: 'force',
-  momentZ: 'moment',
-  momentY: 'moment',
-  torque: 'moment',
-  deflectionY: 'length',
-  deflectionZ: 'length',
-  slopeZ: 'rotation',
-  slopeY: 'rotation',
-  twist: 'rotation',
-};
-const COMPONENT_KIND: Record<Component, Kind> = { fx: 'force', fy: 'force', fz: 'force', mx: 'moment', my: 'moment', mz: 'moment' };
 const ENDS: readonly End[] = ['max', 'min'];
 
 const expectedExtremes = (reference: ReferenceCase) => Object.entries(reference.expected.extremes ?? {}) as [DiagramField, Partial<Record<End, ExpectedBound>>][];

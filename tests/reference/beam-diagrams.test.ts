@@ -10,7 +10,7 @@ import { checkRequest } from '../../src/api/member-check.js';
 import { memberCheckRequest } from '../../src/api/schemas/member-check-request.js';
 import { fieldAt } from '../../src/engine/analysis/field-values.js';
 import type { DiagramField, MemberAnalysis } from '../../src/engine/analysis/result.js';
-import { COMPONENT_KIND, FIELD_KIND, readReferenceCases, type Component, type Kind } from '../support/reference-cases.js';
+import { closeOnScale, COMPONENT_KIND, FIELD_KIND, readReferenceCases, scalesByKind, type Component, type Kind } from '../support/reference-cases.js';
 import { embeddedCatalogues, testApp } from '../support/test-app.js';
 
 interface ExpectedExtreme {
@@ -44,19 +44,10 @@ function scales(reference: ReferenceCase): Record<Kind, number> {
     for (const extreme of [extremes?.max, extremes?.min]) if (extreme) note(FIELD_KIND[field as DiagramField], extreme.value);
   }
   for (const value of reference.expected.values ?? []) note(FIELD_KIND[value.field], value.value);
-  const L = reference.request.member.length;
-  return {
-    force: Math.max(largest.force, largest.moment / L),
-    moment: Math.max(largest.moment, largest.force * L),
-    length: Math.max(largest.length, largest.rotation * L),
-    rotation: Math.max(largest.rotation, largest.length / L),
-  };
+  return scalesByKind(largest, reference.request.member.length);
 }
 
-function close(actual: number, expected: number, tolerance: number, scale: number, what: string): void {
-  const error = Math.abs(actual - expected);
-  expect(error, `${what}: got ${actual}, expected ${expected}`).toBeLessThanOrEqual(tolerance * scale);
-}
+const close = closeOnScale;
 
 async function analyseThroughEngine(body: unknown): Promise<MemberAnalysis> {
   return checkRequest(memberCheckRequest.parse(body), await embeddedCatalogues()).checked.analysis;

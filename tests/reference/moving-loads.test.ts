@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkRequest } from '../../src/api/member-check.js';
 import { memberCheckRequest } from '../../src/api/schemas/member-check-request.js';
 import type { DiagramField } from '../../src/engine/analysis/result.js';
-import { COMPONENT_KIND, FIELD_KIND, readReferenceCases, type Component, type Kind } from '../support/reference-cases.js';
+import { closeOnScale, COMPONENT_KIND, FIELD_KIND, readReferenceCases, scalesByKind, type Component, type Kind } from '../support/reference-cases.js';
 import { embeddedCatalogues, testApp } from '../support/test-app.js';
 
 type End = 'max' | 'min';
@@ -63,19 +63,10 @@ function scales(reference: ReferenceCase): Record<Kind, number> {
       for (const [component, bound] of Object.entries(reaction[end] ?? {}) as [Component, ExpectedBound][]) note(COMPONENT_KIND[component], bound.value);
     }
   }
-  const L = reference.request.member.length;
-  return {
-    force: Math.max(largest.force, largest.moment / L),
-    moment: Math.max(largest.moment, largest.force * L),
-    length: Math.max(largest.length, largest.rotation * L),
-    rotation: Math.max(largest.rotation, largest.length / L),
-  };
+  return scalesByKind(largest, reference.request.member.length);
 }
 
-function close(actual: number, expected: number, tolerance: number, scale: number, what: string): void {
-  const error = Math.abs(actual - expected);
-  expect(error, `${what}: got ${actual}, expected ${expected}`).toBeLessThanOrEqual(tolerance * scale);
-}
+const close = closeOnScale;
 
 /** The actual place matches one of the expected places: every coordinate it gives within tolerance * L. */
 function closeToOneOf(actual: Location, expected: readonly Location[], tolerance: number, L: number, what: string): void {
@@ -122,9 +113,8 @@ describe('moving-load reference cases', () => {
     await app.close();
   });
 
-  it('holds 5 to 7 cases, each with a source, a derivation and one moving load', () => {
+  it('holds at least 5 cases, each with a source, a derivation and one moving load', () => {
     expect(cases.length).toBeGreaterThanOrEqual(5);
-    expect(cases.length).toBeLessThanOrEqual(7);
     for (const { file, reference } of cases) {
       expect(reference.source, file).toMatch(/\w{3,}/);
       expect(reference.derivation, file).toMatch(/\w{3,}/);

@@ -6,6 +6,7 @@
 
 import { defaultCombinations, type ActionSummary } from '../../engine/combinations/default-combinations.js';
 import type { ActionCategory, CombinationModel, LoadCaseModel, MovingLoadModel } from '../../engine/combinations/load-actions.js';
+import { structuralNodesOf } from '../../engine/combinations/influence-lines.js';
 import { gridIntervals, trainPositions } from '../../engine/combinations/train-positions.js';
 import type { LoadModel } from '../../engine/member/model.js';
 import { invalidField, tooMuchWork } from '../problems.js';
@@ -193,7 +194,7 @@ export function resolveCombinations(request: CombinationFields, read: ReadCombin
       notices.push(`selfWeight is true, but ${without.length === 1 ? `combination ${named} gives` : `combinations ${named} give`} no factor for "${SELF_WEIGHT_CASE}": the member's own weight is left out there.`);
     }
   }
-  const structuralNodes = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
+  const structuralNodes = structuralNodesOf(member);
   const positionsOf = new Map(movingLoads.map((train) => [train.id, trainPositions(train, structuralNodes, member.length).length]));
   let loadStates = 0;
   let axles = 0;

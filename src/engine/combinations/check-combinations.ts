@@ -3,12 +3,15 @@
  *
  * A combination without a moving load is one load state: the load cases times their factors
  * (superposition; the member is linear elastic). A combination with a moving load is a family of load
- * states, one for each position of the train: the search visits every position of trainPositions(), then
- * refines, by Brent's method, the neighbourhood of the two best positions for the governing utilization
- * and for the largest and smallest value of every diagram. Between the nodes a response is a polynomial
- * of low degree in the load position, so the refined extremes are exact to rounding in value and to
- * about 1e-7 of the member length in position (checked against the closed-form absolute maximum moment of a simple span under
- * two moving loads, AISC Steel Construction Manual, beam diagrams, cases 43 and 44).
+ * states, one for each position of the train. The checks are made at every position of
+ * trainPositions() (a grid, and each axle on an end, support or hinge and a hair to either side), then
+ * near the two best positions for the governing utilization refined by Brent's method, and where each
+ * diagram's largest and smallest values lie. Those extremes are found over every position by Brent's
+ * method on the superposed diagram (superposition.ts): exact to rounding in value and to about 1e-7 of
+ * the length in position (checked against the closed-form absolute maximum moment of a simple span
+ * under two moving loads, AISC Steel Construction Manual, beam diagrams, cases 43 and 44). The
+ * envelopes of the diagrams and reactions come from the influence lines, exact over every position
+ * (train-envelope.ts).
  */
 
 import { analyseMember } from '../analysis/analyse-member.js';
@@ -26,7 +29,7 @@ import { brentMaximum } from './brent-maximum.js';
 import { combinedStaticLoads, trainLoads } from './combined-loads.js';
 import { emptyEnvelope, envelopePositions, mergeEnvelope, widenEnvelope, type DiagramEnvelope, type EnvelopePositions } from './diagram-envelope.js';
 import type { CombinationModel, CombinationPurpose, LoadCaseModel, MovingLoadModel } from './load-actions.js';
-import { FIELD_PLANE, influenceLines, type InfluenceLines } from './influence-lines.js';
+import { FIELD_PLANE, influenceLines, structuralNodesOf, type InfluenceLines } from './influence-lines.js';
 import { REACTION_COMPONENTS, trainEnvelope, type ReactionBound, type ReactionBounds, type ReactionComponent, type TrainEnvelope } from './train-envelope.js';
 import { superposedFieldExtremes } from './superposition.js';
 import { trainPositions } from './train-positions.js';
@@ -146,12 +149,8 @@ function validateCases(member: Omit<MemberModel, 'loads'>, cases: readonly LoadC
   });
 }
 
-/** Ends, supports and hinges: where an axle makes a breakpoint of every response (a load-case load does not). */
-function structuralNodesOf(member: Omit<MemberModel, 'loads'>): number[] {
-  return [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)];
-}
 
-/** The structural nodes and every load-case load point and end: where the fixed loads' diagrams may jump or kink. */
+/** The structural nodes (where an axle makes a breakpoint of every response) and every load-case load point and end: where the fixed loads' diagrams may jump or kink. */
 function fixedNodesOf(member: Omit<MemberModel, 'loads'>, cases: readonly LoadCaseModel[]): number[] {
   const nodes = structuralNodesOf(member);
   for (const loadCase of cases) {

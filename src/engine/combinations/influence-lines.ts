@@ -71,7 +71,7 @@ export interface InfluenceLines {
 }
 
 /** Ascending coefficients of the cubic through the values at the four fit points of [0, 1]. */
-export function cubicThrough(y0: number, y1: number, y2: number, y3: number, out: Float64Array, at: number): void {
+function cubicThrough(y0: number, y1: number, y2: number, y3: number, out: Float64Array, at: number): void {
   const [t0, t1, t2, t3] = FIT_POINTS;
   // Newton's divided differences, then the monomial form.
   const d01 = (y1 - y0) / (t1 - t0);
@@ -86,7 +86,8 @@ export function cubicThrough(y0: number, y1: number, y2: number, y3: number, out
   out[at + 3] = c3;
 }
 
-function structuralNodesOf(member: Omit<MemberModel, 'loads'>): number[] {
+/** Ends, supports and hinges, ascending, nodes closer than the node tolerance merged: where every influence line breaks. */
+export function structuralNodesOf(member: Pick<MemberModel, 'length' | 'supports' | 'hinges'>): number[] {
   const tolerance = POSITION_TOLERANCE * member.length;
   const all = [0, member.length, ...member.supports.map((support) => support.position), ...member.hinges.map((hinge) => hinge.position)]
     .map((x) => Math.min(member.length, Math.max(0, x)))

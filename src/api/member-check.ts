@@ -35,6 +35,7 @@ import { jsonPointer, ProblemError, tooMuchWork } from './problems.js';
 import type { MemberCheckRequest } from './schemas/member-check-request.js';
 import type { MemberCheckResponse } from './schemas/member-check-response.js';
 import { SELF_WEIGHT_CASE } from './schemas/load-combinations-input.js';
+import { memberCheckAudit } from './audit/input-digest.js';
 import { DEFAULT_SAMPLES } from './schemas/output-options.js';
 
 export interface Catalogues {
@@ -197,6 +198,7 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
         ? undefined
         : presentLoadCombinations(check.combinations, checked.combinations, check.supportLabels, units),
     notices: [...outcome.notices],
+    audit: memberCheckAudit(check, section, material),
   };
 }
 

@@ -6,6 +6,7 @@
 import { overallDepth, overallWidth } from '../catalogues/overall-size.js';
 import type { SectionEntry } from '../catalogues/section-entry.js';
 import { SCREENING_CAUTION } from '../engine/caution.js';
+import { sizingAudit } from './audit/input-digest.js';
 import type { SectionDimensions } from '../engine/sections/dimensions.js';
 import { rankCandidates, type SizingObjective } from '../engine/sizing/rank-candidates.js';
 import type { LoadedCatalogues } from './load-catalogues.js';
@@ -151,6 +152,7 @@ export function runMemberSizing(request: MemberSizingRequest, catalogues: Loaded
     candidates: rows,
     excluded,
     notices: [SCREENING_CAUTION, ...(excluded.length > 0 ? [`${excluded.length} candidates were left out by the limits.`] : [])],
+    audit: sizingAudit(check, request.material, all, { maxDepth, maxWidth, maxMassPerLength: maxMass }, objective),
   };
 }
 

@@ -4,12 +4,11 @@ import { OpenApiGeneratorV31, OpenAPIRegistry, type RouteConfig } from '@asteaso
 import { PROBLEMS, type ProblemName } from '../problems.js';
 import type { RouteContract } from '../route-contract.js';
 import { problemOutput } from '../schemas/problem.js';
+import { SERVICE_VERSION } from '../service-version.js';
 
 /** Problems any route can answer with. */
 const EVERY_ROUTE: readonly ProblemName[] = ['internal'];
 const EVERY_BODY_ROUTE: readonly ProblemName[] = ['invalidInput', 'malformedJson', 'bodyTooLarge', 'unsupportedMediaType'];
-
-export const SERVICE_VERSION = '0.1.0';
 
 function problemResponses(names: readonly ProblemName[]): RouteConfig['responses'] {
   const byStatus = new Map<number, ProblemName[]>();

@@ -12,6 +12,7 @@ import { presentSection } from '../present/section.js';
 import type { RouteContract } from '../route-contract.js';
 import { SECTION_PROPERTIES_EXAMPLE, sectionPropertiesRequest, sectionPropertiesResponse } from '../schemas/section-properties-exchange.js';
 import { parseBody } from '../validation.js';
+import { sectionPropertiesAudit } from '../audit/input-digest.js';
 
 export const sectionPropertiesContract: RouteContract = {
   method: 'post',
@@ -46,5 +47,5 @@ function sectionPropertiesAnswer(requestBody: unknown, catalogues: Catalogues) {
   reader.finish();
   const resolved = section();
   const density = material?.density;
-  return { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION] };
+  return { units: units.names, section: presentSection(resolved, units, density), notices: [SCREENING_CAUTION], audit: sectionPropertiesAudit(resolved, density, units.names) };
 }

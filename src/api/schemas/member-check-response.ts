@@ -20,6 +20,19 @@ export const notices = z
   .array(z.string())
   .openapi({ description: 'Cautions and the limits of the calculation. The first is always the screening-calculation caution.' });
 
+export const auditOutput = z
+  .object({
+    engineVersion: z.string().openapi({ description: 'The version of the service that computed the answer.' }),
+    inputDigest: z
+      .string()
+      .regex(/^[0-9a-f]{64}$/)
+      .openapi({
+        description:
+          'SHA-256 (hex) of the canonical JSON of the input as the engine received it: every quantity in SI, section and material as resolved (catalogue values included), defaults not filled in, output options; object keys sorted, no whitespace, numbers as ECMAScript writes them, labels left out. Equal inputs give equal digests on every run and machine, however the request wrote its values.',
+      }),
+  })
+  .openapi('Audit', { description: 'Which engine and which exact input produced this answer.' });
+
 export const memberCheckResponse = z
   .object({
     units: unitsEcho,
@@ -41,6 +54,7 @@ export const memberCheckResponse = z
     ...checksOutput,
     loadCombinations: loadCombinationsOutput,
     notices,
+    audit: auditOutput,
   })
   .openapi('MemberCheckResponse');
 

@@ -3,7 +3,7 @@
 import { SIZING_OBJECTIVES } from '../../engine/sizing/rank-candidates.js';
 import { FAILURE_MODES } from '../../engine/checks/failure-mode.js';
 import { memberCheckRequest } from './member-check-request.js';
-import { memberCheckResponse, notices, unitsEcho } from './member-check-response.js';
+import { auditOutput, memberCheckResponse, notices, unitsEcho } from './member-check-response.js';
 import { presentedQuantity, quantity } from './quantity.js';
 import { shapeInput } from './section-input.js';
 import { z } from './zod.js';
@@ -88,6 +88,7 @@ export const memberSizingResponse = z
       .array(z.object({ designation: z.string().openapi({ description: 'The candidate left out.' }), reason: z.string().openapi({ description: 'Which limit it is beyond.' }) }))
       .openapi({ description: 'Candidates left out by the limits.' }),
     notices,
+    audit: auditOutput.openapi({ description: 'The engine version and the digest of the sizing input: the check without its section, the material as the request names it, every candidate shape, the limits in SI and the objective.' }),
   })
   .openapi('MemberSizingResponse');
 

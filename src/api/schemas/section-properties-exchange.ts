@@ -1,6 +1,6 @@
 /** POST /v1/section-properties: the properties of one section, from a designation or a shape. */
 
-import { notices, unitsEcho } from './member-check-response.js';
+import { auditOutput, notices, unitsEcho } from './member-check-response.js';
 import { materialInput } from './material-input.js';
 import { outputUnits } from './output-options.js';
 import { resolvedSectionOutput } from './section-output.js';
@@ -23,7 +23,7 @@ export const sectionPropertiesRequest = z
   .openapi('SectionPropertiesRequest');
 
 export const sectionPropertiesResponse = z
-  .object({ units: unitsEcho, section: resolvedSectionOutput, notices })
+  .object({ units: unitsEcho, section: resolvedSectionOutput, notices, audit: auditOutput })
   .openapi('SectionPropertiesResponse');
 
 export type SectionPropertiesRequest = z.infer<typeof sectionPropertiesRequest>;

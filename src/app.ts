@@ -18,6 +18,7 @@ import { healthContracts, healthRoutes } from './api/routes/health.js';
 import { materialContracts, materialRoutes } from './api/routes/materials.js';
 import { DEFAULT_BATCH_BODY_LIMIT, memberCheckBatchContract, memberCheckBatchRoutes } from './api/routes/member-check-batch.js';
 import { memberCheckContract, memberCheckRoutes } from './api/routes/member-checks.js';
+import { memberDiagramsContract, memberRecordRoutes, memberReportContract } from './api/routes/member-records.js';
 import { memberSizingContract, memberSizingRoutes } from './api/routes/member-sizing.js';
 import { sectionPropertiesContract, sectionPropertiesRoutes } from './api/routes/section-properties.js';
 import { sectionContracts, sectionRoutes } from './api/routes/sections.js';
@@ -44,7 +45,7 @@ export const DEFAULT_BODY_LIMIT = 1024 * 1024;
 
 /** The route contracts, in the order the document lists them. */
 export function routeContracts(): RouteContract[] {
-  return [memberCheckContract, memberCheckBatchContract, memberSizingContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts];
+  return [memberCheckContract, memberCheckBatchContract, memberSizingContract, memberReportContract, memberDiagramsContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts];
 }
 
 const REQUEST_ID = /^[\w.:-]{1,128}$/;
@@ -104,6 +105,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   await app.register(memberCheckRoutes(catalogues, answers));
   await app.register(memberCheckBatchRoutes(catalogues, options.batchBodyLimit ?? DEFAULT_BATCH_BODY_LIMIT));
   await app.register(memberSizingRoutes(catalogues, answers));
+  await app.register(memberRecordRoutes(catalogues));
   await app.register(sectionPropertiesRoutes(catalogues, answers));
   await app.register(sectionRoutes(catalogues));
   await app.register(materialRoutes(catalogues));

@@ -18,6 +18,8 @@ export interface RouteContract {
   readonly query?: z.ZodObject;
   readonly params?: z.ZodObject;
   readonly response: z.ZodType;
+  /** The 200 answer's media type; default application/json. */
+  readonly responseMediaType?: 'application/json' | 'text/html' | 'image/svg+xml';
   readonly responseDescription: string;
   /** The problems this route can answer with, besides the ones every route can. */
   readonly problems: readonly ProblemName[];

@@ -30,6 +30,8 @@ export interface FigureExtremes {
 
 export interface FigureInput {
   readonly title?: string;
+  /** A line printed under the figure: the screening caution every answer carries. */
+  readonly caution?: string;
   /** Unit names to print beside values. */
   readonly units: { length: string; force: string; moment: string; deflection: string; forcePerLength: string; angle: string };
   readonly length: number;

@@ -2,9 +2,8 @@
  * The figure of one member as a self-contained SVG document: the member to scale with its supports,
  * hinges and loads, a plan view when anything acts along z, then one panel a diagram that is not zero.
  * Black lines, light grey fills and generic sans-serif text, so it reads the same printed in black and
- * white; no scripts, no fonts or images fetched. Every panel plots positive values up.
- *
- * Example: writeFileSync('member.svg', memberFigureSvg(figureInput)).
+ * white; no scripts, no fonts or images fetched. Every panel plots positive values up. The slopes
+ * (slopeZ, slopeY) have no panel; their extremes stay in the answer.
  */
 
 import { assertDrawable, FIGURE_FIELDS, type FigureField, type FigureInput, type SupportKind } from './figure-input.js';
@@ -77,7 +76,11 @@ const STYLE = [
   '.guide{stroke:#8c8c8c;stroke-width:0.6;stroke-dasharray:2 3}',
 ].join('');
 
-/** Throws a RangeError, drawing nothing, when a number in the input is not finite (see assertDrawable). */
+/**
+ * memberFigureSvg(input): the SVG document, 180 mm wide, as a string.
+ * Throws a RangeError, drawing nothing, when a number in the input is not finite (see assertDrawable).
+ * Example: writeFileSync('member.svg', memberFigureSvg(figureInput)).
+ */
 export function memberFigureSvg(input: FigureInput): string {
   assertDrawable(input);
   const toX = (x: number) => LEFT + (x / input.length) * (RIGHT - LEFT);
@@ -99,6 +102,10 @@ export function memberFigureSvg(input: FigureInput): string {
     drawPanel(body, input, panel, top, xText, guides, toX, tolerance[FIELD_KIND[panel.field]]);
     top += PANEL_HEIGHT;
   }
+  if (input.caution !== undefined && input.caution !== '') {
+    body.push(textElement('text', { x: LEFT, y: top + 14, class: 'caption' }, input.caution));
+    top += 22;
+  }
   const height = top + 8;
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${WIDTH / UNITS_PER_MM}mm" height="${formatCoordinate(height / UNITS_PER_MM)}mm"`,
@@ -117,43 +124,33 @@ function hasHorizontalLoads(input: FigureInput): boolean {
 
 /** The member in the x-y plane, +y up: loads above, supports below, then the dimension line. */
 function drawElevation(out: string[], input: FigureInput, toX: (x: number) => number, top: number): number {
-  const beamY = top + 92;
+  const { force, moment } = input.units;
+  const stacks = input.pointLoads.map((load) =>
+    labelLines(load.label, [
+      ['Fy', load.fy, force],
+      ['Fx', load.fx, force],
+      ['Mx', load.mx, moment],
+      ['Mz', load.mz, moment],
+    ]),
+  );
+  // Point loads right above the member, the distributed loads in rows above them.
+  const pointZone = pointZoneHeight(stacks);
+  const beamY = top + 16 + Math.max(ARROW, pointZone + bandCount(input, 'qy') * BAND_ROW);
   out.push(textElement('text', { x: LEFT, y: top + 12, class: 'caption' }, 'Elevation: x along the member, +y up'));
-  drawBands(out, input, toX, beamY, 'qy', -1);
+  drawBands(out, input, toX, beamY - pointZone, 'qy', -1);
   out.push(element('line', { x1: LEFT, y1: beamY, x2: RIGHT, y2: beamY, class: 'member' }));
   drawSupports(out, input, toX, beamY, true);
   drawHinges(out, input, toX, beamY);
-  const { force, moment } = input.units;
   input.pointLoads.forEach((load, i) => {
     const x = toX(load.position);
-    // Alternate rows keep the labels of neighbouring loads apart.
-    const labelY = beamY - ARROW - 5 - (i % 2) * 12;
-    let prefix = load.label !== undefined && load.label !== '' ? `${load.label}: ` : '';
-    const named = (text: string) => {
-      const withLabel = prefix + text;
-      prefix = '';
-      return withLabel;
-    };
-    if (load.fy !== 0) {
-      if (load.fy < 0) arrow(out, x, beamY - ARROW, x, beamY - 2);
-      else arrow(out, x, beamY - 2, x, beamY - ARROW);
-      label(out, x, labelY, named(`Fy = ${formatValue(load.fy)} ${force}`));
-    }
-    if (load.fx !== 0) {
-      const direction = Math.sign(load.fx);
-      arrow(out, x - direction * 30, beamY - 6, x, beamY - 6);
-      label(out, x - direction * 32, beamY - 9, named(`Fx = ${formatValue(load.fx)} ${force}`), direction > 0 ? 'end' : 'start');
-    }
-    if (load.mx !== 0) {
-      // A torque is drawn as its vector, a double-headed arrow along x (right-hand rule).
-      const direction = Math.sign(load.mx);
-      arrow(out, x, beamY - 18, x + direction * 28, beamY - 18, true);
-      label(out, x + direction * 31, beamY - 15, named(`Mx = ${formatValue(load.mx)} ${moment}`), direction > 0 ? 'start' : 'end');
-    }
-    if (load.mz !== 0) {
-      momentArc(out, x, beamY, load.mz > 0);
-      label(out, x + MOMENT_RADIUS + 3, beamY - MOMENT_RADIUS - 3, named(`Mz = ${formatValue(load.mz)} ${moment}`), 'start');
-    }
+    if (load.fy < 0) arrow(out, x, beamY - ARROW, x, beamY - 2);
+    else if (load.fy > 0) arrow(out, x, beamY - 2, x, beamY - ARROW);
+    // Fx ends at its point from the side it pushes from.
+    if (load.fx !== 0) arrow(out, x - Math.sign(load.fx) * 30, beamY - 6, x, beamY - 6);
+    // A torque is drawn as its vector, a double-headed arrow along x (right-hand rule).
+    if (load.mx !== 0) arrow(out, x, beamY - 18, x + Math.sign(load.mx) * 28, beamY - 18, true);
+    if (load.mz !== 0) momentArc(out, x, beamY, load.mz > 0);
+    stackLabels(out, x, beamY, i, stacks[i] ?? []);
   });
   const dimensionY = beamY + 50;
   arrow(out, (LEFT + RIGHT) / 2, dimensionY, LEFT, dimensionY);
@@ -166,44 +163,79 @@ function drawElevation(out: string[], input: FigureInput, toX: (x: number) => nu
 
 /** The member seen from above (+y towards the reader), +z down the page: what acts along z. */
 function drawPlan(out: string[], input: FigureInput, toX: (x: number) => number, top: number): number {
-  const beamY = top + 84;
+  const { force, moment } = input.units;
+  const stacks = input.pointLoads.map((load) =>
+    labelLines(load.label, [
+      ['Fz', load.fz, force],
+      ['My', load.my, moment],
+    ]),
+  );
+  // Point loads right above the member, the distributed loads in rows above them.
+  const pointZone = pointZoneHeight(stacks);
+  const beamY = top + 16 + Math.max(ARROW, pointZone + bandCount(input, 'qz') * BAND_ROW);
   out.push(textElement('text', { x: LEFT, y: top + 12, class: 'caption' }, 'Plan, seen from above: x along the member, +z down the page'));
-  drawBands(out, input, toX, beamY, 'qz', 1);
+  drawBands(out, input, toX, beamY - pointZone, 'qz', 1);
   out.push(element('line', { x1: LEFT, y1: beamY, x2: RIGHT, y2: beamY, class: 'member' }));
   drawSupports(out, input, toX, beamY, false);
   drawHinges(out, input, toX, beamY);
-  const { force, moment } = input.units;
   input.pointLoads.forEach((load, i) => {
     const x = toX(load.position);
-    const labelY = beamY - ARROW - 5 - (i % 2) * 12;
-    const prefix = load.label !== undefined && load.label !== '' ? `${load.label}: ` : '';
-    if (load.fz !== 0) {
-      if (load.fz > 0) arrow(out, x, beamY - ARROW, x, beamY - 2);
-      else arrow(out, x, beamY - 2, x, beamY - ARROW);
-      label(out, x, labelY, `${prefix}Fz = ${formatValue(load.fz)} ${force}`);
-    }
-    if (load.my !== 0) {
-      // Seen from +y, a positive moment about y turns counterclockwise, as Mz does in the elevation.
-      momentArc(out, x, beamY, load.my > 0);
-      label(out, x + MOMENT_RADIUS + 3, beamY - MOMENT_RADIUS - 3, `${load.fz === 0 ? prefix : ''}My = ${formatValue(load.my)} ${moment}`, 'start');
-    }
+    if (load.fz > 0) arrow(out, x, beamY - ARROW, x, beamY - 2);
+    else if (load.fz < 0) arrow(out, x, beamY - 2, x, beamY - ARROW);
+    // Seen from +y, a positive moment about y turns counterclockwise, as Mz does in the elevation.
+    if (load.my !== 0) momentArc(out, x, beamY, load.my > 0);
+    stackLabels(out, x, beamY, i, stacks[i] ?? []);
   });
   return beamY + 36;
 }
 
+/** "Fy = -6 kN" for each non-zero component, the load's own label before the first. */
+function labelLines(name: string | undefined, components: readonly (readonly [string, number, string])[]): string[] {
+  const lines: string[] = [];
+  for (const [symbol, value, unit] of components) {
+    if (value !== 0) lines.push(`${lines.length === 0 && name !== undefined && name !== '' ? `${name}: ` : ''}${symbol} = ${formatValue(value)} ${unit}`);
+  }
+  return lines;
+}
+
+const LINE_HEIGHT = 12;
+
+/** Room above the member for the point loads' arrows and the tallest stack of labels, odd loads one line higher (none without point loads). */
+function pointZoneHeight(stacks: readonly (readonly string[])[]): number {
+  if (stacks.length === 0) return 0;
+  const lines = Math.max(1, ...stacks.map((stack, i) => stack.length + (i % 2)));
+  return ARROW + 5 + lines * LINE_HEIGHT;
+}
+
+/** Height of one distributed load's row: its band and its label above it. */
+const BAND_ROW = BAND + LINE_HEIGHT + 6;
+
+/** How many distributed loads have some of this component: each gets a row of its own. */
+function bandCount(input: FigureInput, component: 'qy' | 'qz'): number {
+  return input.distributedLoads.filter((load) => load[component][0] !== 0 || load[component][1] !== 0).length;
+}
+
+/** A load's labels stacked above its arrow; every other load's stack a line higher, to keep neighbours apart. */
+function stackLabels(out: string[], x: number, beamY: number, index: number, lines: readonly string[]): void {
+  const bottom = beamY - ARROW - 5 - (index % 2) * LINE_HEIGHT;
+  lines.forEach((line, j) => label(out, x, bottom - (lines.length - 1 - j) * LINE_HEIGHT, line));
+}
+
 /**
- * Distributed loads of one plane as bands above the member, their height proportional to the
- * intensity; `down` is the sign of q whose arrows point down the page (-1 for qy, +1 for qz).
+ * Distributed loads of one plane as bands above the member, one row each (stacked, so that loads
+ * over the same length do not hide one another), their height proportional to the intensity; `down`
+ * is the sign of q whose arrows point down the page (-1 for qy, +1 for qz).
  */
 function drawBands(out: string[], input: FigureInput, toX: (x: number) => number, beamY: number, component: 'qy' | 'qz', down: 1 | -1): void {
   let largest = 0;
   for (const load of input.distributedLoads) largest = Math.max(largest, Math.abs(load[component][0]), Math.abs(load[component][1]));
   if (largest === 0) return;
-  const base = beamY - 2;
   const heightOf = (q: number) => (BAND * Math.abs(q)) / largest;
+  let row = 0;
   for (const load of input.distributedLoads) {
     const [qStart, qEnd] = load[component];
     if (qStart === 0 && qEnd === 0) continue;
+    const base = beamY - 2 - BAND_ROW * row++;
     const x0 = toX(load.from);
     const x1 = toX(load.to);
     const outline = [x0, base, x0, base - heightOf(qStart)];

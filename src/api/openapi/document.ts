@@ -60,7 +60,7 @@ export function buildOpenApiDocument(contracts: readonly RouteContract[]) {
         ...(contract.params ? { params: contract.params } : {}),
       },
       responses: {
-        200: { description: contract.responseDescription, content: { 'application/json': { schema: contract.response } } },
+        200: { description: contract.responseDescription, content: { [contract.responseMediaType ?? 'application/json']: { schema: contract.response } } },
         ...problemResponses(problems),
       },
     });

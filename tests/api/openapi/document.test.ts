@@ -81,8 +81,17 @@ describe('the OpenAPI document', () => {
 
   describe.each(routeContracts().filter((contract) => contract.exampleBody !== undefined))('example of $operationId', (contract) => {
     it('is answered 200', async () => {
-      const response = await request(app.server)[contract.method](contract.path).send(contract.exampleBody as object);
+      const mediaType = contract.responseMediaType ?? 'application/json';
+      const response = await request(app.server)[contract.method](contract.path).send(contract.exampleBody as object).buffer(true);
       expect(response.status, JSON.stringify(response.body).slice(0, 500)).toBe(200);
+      expect(response.headers['content-type']).toMatch(new RegExp(`^${mediaType.replace('+', '\\+')}`));
+      if (mediaType !== 'application/json') {
+        // A rendering: a document of its kind, carrying the caution wherever it is shown.
+        const text = Buffer.isBuffer(response.body) ? response.body.toString('utf8') : response.text;
+        expect(text).toMatch(mediaType === 'text/html' ? /^<!DOCTYPE html>/ : /^<svg /);
+        if (mediaType === 'text/html') expect(text).toMatch(/licensed engineer/);
+        return;
+      }
       expect(response.body.notices[0]).toMatch(/licensed engineer/);
       // The answer is what the response schema says: parsing strips undeclared fields, so equality fails on any.
       expect(contract.response.parse(response.body)).toEqual(response.body);

@@ -4,22 +4,12 @@
  * computes no engineering quantity; it only places what it is given.
  */
 
-/** The diagrams a figure knows, with the same names and sign conventions as the answer's Diagrams. */
-export const FIGURE_FIELDS = [
-  'axial',
-  'shearY',
-  'momentZ',
-  'shearZ',
-  'momentY',
-  'torque',
-  'deflectionY',
-  'slopeZ',
-  'deflectionZ',
-  'slopeY',
-  'twist',
-] as const;
+import { DIAGRAM_FIELDS, type DiagramField } from '../engine/analysis/result.js';
 
-export type FigureField = (typeof FIGURE_FIELDS)[number];
+/** The diagrams a figure knows: the answer's, with the same names and sign conventions. */
+export const FIGURE_FIELDS = DIAGRAM_FIELDS;
+
+export type FigureField = DiagramField;
 
 export type SupportKind = 'fixed' | 'pinned' | 'roller' | 'general';
 

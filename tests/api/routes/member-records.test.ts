@@ -5,6 +5,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MEMBER_CHECK_EXAMPLE } from '../../../src/api/schemas/member-check-request.js';
 import { testApp } from '../../support/test-app.js';
+import { asText } from '../../support/text-body.js';
 
 let app: FastifyInstance;
 beforeAll(async () => {
@@ -13,15 +14,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await app.close();
 });
-
-/** supertest keeps an image/* body as bytes: read it as UTF-8 text. */
-function asText(response: request.Response, done: (error: Error | null, body: string) => void): void {
-  const stream = response as unknown as NodeJS.ReadableStream;
-  let text = '';
-  stream.setEncoding('utf8');
-  stream.on('data', (chunk: string) => (text += chunk));
-  stream.on('end', () => done(null, text));
-}
 
 const report = { title: 'Work platform WP-12, joist J3', reference: 'Q-2026-0412', preparedBy: 'A. Engineer' };
 const hostile = { title: '<script>alert("x")</script> & \'quotes\'', reference: '<img src=x onerror=alert(1)>', preparedBy: '"><svg onload=alert(2)>' };

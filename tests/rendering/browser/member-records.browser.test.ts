@@ -13,15 +13,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MEMBER_CHECK_COMBINATIONS_EXAMPLE, MEMBER_CHECK_EXAMPLE } from '../../../src/api/schemas/member-check-request.js';
 import { NO_BROWSER_MESSAGE, systemBrowserPath } from '../../support/system-browser.js';
 import { testApp } from '../../support/test-app.js';
-
-/** supertest keeps an image/* body as bytes: read it as UTF-8 text. */
-function asText(response: request.Response, done: (error: Error | null, body: string) => void): void {
-  const stream = response as unknown as NodeJS.ReadableStream;
-  let text = '';
-  stream.setEncoding('utf8');
-  stream.on('data', (chunk: string) => (text += chunk));
-  stream.on('end', () => done(null, text));
-}
+import { asText } from '../../support/text-body.js';
 
 const executablePath = systemBrowserPath();
 if (executablePath === undefined) console.warn(NO_BROWSER_MESSAGE);

@@ -82,4 +82,19 @@ describe('POST /v1/member-diagrams', () => {
     const max = json.body.extremes.momentZ.max.value as number;
     expect(svg).toContain(`${Number(max.toPrecision(4))} kN*m`);
   });
+
+  it('escapes the labels of loads and supports drawn in the figure', async () => {
+    const body = {
+      ...MEMBER_CHECK_EXAMPLE,
+      member: { ...MEMBER_CHECK_EXAMPLE.member, supports: [{ position: 0, type: 'pinned', label: '<script>alert(1)</script>' }, { position: '3.6 m', type: 'roller', label: '"B" & \'C\'' }] },
+      loads: [{ type: 'point', position: '1.2 m', fy: '-6 kN', label: '</text><script>x()</script>' }],
+    };
+    const response = await request(app.server).post('/v1/member-diagrams').send(body).buffer(true).parse(asText);
+    expect(response.status).toBe(200);
+    const svg = response.body as string;
+    expect(svg).not.toMatch(/<script/);
+    expect(svg).toContain('&lt;script&gt;alert(1)&lt;/script&gt;');
+    expect(svg).toContain('&quot;B&quot; &amp; &#39;C&#39;');
+    expect(svg).toContain('&lt;/text&gt;&lt;script&gt;x()&lt;/script&gt;');
+  });
 });

@@ -23,6 +23,9 @@ import { memberSizingContract, memberSizingRoutes } from './api/routes/member-si
 import { sectionPropertiesContract, sectionPropertiesRoutes } from './api/routes/section-properties.js';
 import { sectionContracts, sectionRoutes } from './api/routes/sections.js';
 import { loadCatalogues, type LoadedCatalogues } from './api/load-catalogues.js';
+import { ServiceMetrics } from './api/metrics.js';
+import { registerOverload, type OverloadOptions } from './api/overload.js';
+import { metricsContract, metricsRoutes } from './api/routes/metrics.js';
 import { prepareGracefulShutdown } from './graceful-shutdown.js';
 
 export interface AppOptions {
@@ -39,13 +42,26 @@ export interface AppOptions {
   readonly answerCacheBytes?: number;
   /** An answer cache to use instead of a new one (tests read its counts). */
   readonly answerCache?: AnswerCache;
+  /** Metrics to record into instead of new ones (tests read them). */
+  readonly metrics?: ServiceMetrics;
+  /** Add Node's process metrics to /metrics (the service process does; tests need not). */
+  readonly processMetrics?: boolean;
+  /** When to shed load with 503 (see src/api/overload.ts); the defaults hold without it. */
+  readonly overload?: OverloadOptions;
+  /** Longest time to receive a whole request, ms (Node's requestTimeout). Default 60 s. */
+  readonly requestTimeoutMs?: number;
+  /** Longest a socket may stay idle, ms (Fastify's connectionTimeout). Default 120 s. */
+  readonly connectionTimeoutMs?: number;
 }
+
+export const DEFAULT_REQUEST_TIMEOUT_MS = 60_000;
+export const DEFAULT_CONNECTION_TIMEOUT_MS = 120_000;
 
 export const DEFAULT_BODY_LIMIT = 1024 * 1024;
 
 /** The route contracts, in the order the document lists them. */
 export function routeContracts(): RouteContract[] {
-  return [memberCheckContract, memberCheckBatchContract, memberSizingContract, memberReportContract, memberDiagramsContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts];
+  return [memberCheckContract, memberCheckBatchContract, memberSizingContract, memberReportContract, memberDiagramsContract, sectionPropertiesContract, ...sectionContracts, ...materialContracts, ...healthContracts, metricsContract];
 }
 
 const REQUEST_ID = /^[\w.:-]{1,128}$/;
@@ -55,6 +71,8 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     logger: options.logger ?? false,
     logController: new OneLinePerRequest(),
     bodyLimit: options.bodyLimit ?? DEFAULT_BODY_LIMIT,
+    requestTimeout: options.requestTimeoutMs ?? DEFAULT_REQUEST_TIMEOUT_MS,
+    connectionTimeout: options.connectionTimeoutMs ?? DEFAULT_CONNECTION_TIMEOUT_MS,
     requestIdHeader: false,
     genReqId: (request) => {
       const given = request.headers['x-request-id'];
@@ -74,6 +92,9 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   });
   // JSON only: without this Fastify would also take text/plain bodies.
   app.removeContentTypeParser('text/plain');
+  const metrics = options.metrics ?? new ServiceMetrics({ processMetrics: options.processMetrics ?? false });
+  metrics.watch(app);
+  await registerOverload(app, options.overload);
   const answers = options.answerCache ?? new AnswerCache(options.answerCacheBytes ?? DEFAULT_ANSWER_CACHE_BYTES);
   registerJsonBody(app, answers);
   registerErrorHandler(app);
@@ -102,6 +123,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
       sectionFamilies: catalogues.sectionFamilies,
     })),
   );
+  await app.register(metricsRoutes(metrics));
   await app.register(memberCheckRoutes(catalogues, answers));
   await app.register(memberCheckBatchRoutes(catalogues, options.batchBodyLimit ?? DEFAULT_BATCH_BODY_LIMIT));
   await app.register(memberSizingRoutes(catalogues, answers));

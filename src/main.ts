@@ -2,7 +2,8 @@
 
 import { DEFAULT_ANSWER_CACHE_BYTES } from './api/answer-cache.js';
 import { DEFAULT_BATCH_BODY_LIMIT } from './api/routes/member-check-batch.js';
-import { buildApp, DEFAULT_BODY_LIMIT } from './app.js';
+import { DEFAULT_OVERLOAD } from './api/overload.js';
+import { buildApp, DEFAULT_BODY_LIMIT, DEFAULT_CONNECTION_TIMEOUT_MS, DEFAULT_REQUEST_TIMEOUT_MS } from './app.js';
 
 function integerFromEnvironment(name: string, fallback: number, least: number, most = Number.MAX_SAFE_INTEGER): number {
   const raw = process.env[name];
@@ -22,6 +23,15 @@ async function main(): Promise<void> {
     batchBodyLimit: integerFromEnvironment('BATCH_BODY_LIMIT_BYTES', DEFAULT_BATCH_BODY_LIMIT, 1),
     answerCacheBytes: integerFromEnvironment('ANSWER_CACHE_BYTES', DEFAULT_ANSWER_CACHE_BYTES, 0),
     companyCataloguePath: process.env.MEMBERPROOF_CATALOGUES || undefined,
+    processMetrics: true,
+    overload: {
+      maxEventLoopDelayMs: integerFromEnvironment('MAX_EVENT_LOOP_DELAY_MS', DEFAULT_OVERLOAD.maxEventLoopDelayMs, 0),
+      maxHeapUsedBytes: integerFromEnvironment('MAX_HEAP_USED_BYTES', DEFAULT_OVERLOAD.maxHeapUsedBytes, 0),
+      maxRssBytes: integerFromEnvironment('MAX_RSS_BYTES', DEFAULT_OVERLOAD.maxRssBytes, 0),
+      retryAfterSeconds: integerFromEnvironment('RETRY_AFTER_SECONDS', DEFAULT_OVERLOAD.retryAfterSeconds, 1, 3600),
+    },
+    requestTimeoutMs: integerFromEnvironment('REQUEST_TIMEOUT_MS', DEFAULT_REQUEST_TIMEOUT_MS, 0),
+    connectionTimeoutMs: integerFromEnvironment('CONNECTION_TIMEOUT_MS', DEFAULT_CONNECTION_TIMEOUT_MS, 0),
   });
   // PORT=0 takes any free port (the tests use it).
   const port = integerFromEnvironment('PORT', 3000, 0, 65535);

@@ -73,6 +73,7 @@ export function answerKey(url: string, bodyText: string): string {
  */
 export function answerOnce(cache: AnswerCache, request: FastifyRequest, reply: FastifyReply, compute: () => unknown): void {
   if (request.knownAnswer !== '') {
+    if (request.observed) request.observed.cacheHit = true;
     sendJsonText(reply, request.knownAnswer);
     return;
   }

@@ -15,6 +15,7 @@ const FRAMEWORK_PROBLEMS: Record<string, { problem: ProblemName; detail: (error:
 
 export function sendProblem(reply: FastifyReply, error: ProblemError): FastifyReply {
   const status = PROBLEMS[error.problem].status;
+  if (reply.request.observed) reply.request.observed.problem = error.problem;
   return reply.code(status).type(PROBLEM_CONTENT_TYPE).send(error.body(reply.request.url));
 }
 

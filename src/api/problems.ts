@@ -32,6 +32,7 @@ export const PROBLEMS = {
   noPassingCandidate: problemType('no-passing-candidate', 422, 'No candidate section passes'),
   tooManyItems: problemType('too-many-items', 413, 'The batch holds more items than the service accepts'),
   tooMuchWork: problemType('too-much-work', 422, 'The request asks for more calculation than one request may'),
+  overloaded: problemType('overloaded', 503, 'The service is overloaded; retry after the time given'),
   internal: problemType('internal-error', 500, 'The service failed to answer'),
 } as const satisfies Record<string, ProblemType>;
 

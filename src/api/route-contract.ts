@@ -19,7 +19,7 @@ export interface RouteContract {
   readonly params?: z.ZodObject;
   readonly response: z.ZodType;
   /** The 200 answer's media type; default application/json. */
-  readonly responseMediaType?: 'application/json' | 'text/html' | 'image/svg+xml';
+  readonly responseMediaType?: 'application/json' | 'text/html' | 'image/svg+xml' | 'text/plain';
   readonly responseDescription: string;
   /** The problems this route can answer with, besides the ones every route can. */
   readonly problems: readonly ProblemName[];

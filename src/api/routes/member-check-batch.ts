@@ -10,6 +10,7 @@ import type { RouteContract } from '../route-contract.js';
 import { BATCH_EXAMPLE, batchEnvelope, batchItem, batchRequest, batchResponse, MAX_BATCH_ITEMS } from '../schemas/batch-exchange.js';
 import { DEFAULT_SAMPLES } from '../schemas/output-options.js';
 import { parseBody } from '../validation.js';
+import { timedCompute } from '../metrics.js';
 
 export const DEFAULT_BATCH_BODY_LIMIT = 16 * 1024 * 1024;
 
@@ -82,7 +83,9 @@ export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number
         throw new ProblemError('tooManyItems', `The batch asks for ${points} diagram points in all; at most ${MAX_BATCH_DIAGRAM_POINTS}: lower output.samples.`, [{ pointer: '/items', message: `at most ${MAX_BATCH_DIAGRAM_POINTS} diagram points in all` }]);
       }
       const budget: WorkBudget = { remaining: MAX_BATCH_LOAD_STATES, limit: MAX_BATCH_LOAD_STATES };
-      const results = items.map((item, index) => checkItem(item, index, catalogues, request.url, budget));
+      request.observed.batchItems = items.length;
+      const results = timedCompute(request, () => items.map((item, index) => checkItem(item, index, catalogues, request.url, budget)));
+      request.observed.verdicts = results.flatMap((outcome) => ('verdict' in outcome ? [outcome.verdict] : []));
       let pass = 0;
       let fail = 0;
       let worst: { utilization: number; index: number } | undefined;

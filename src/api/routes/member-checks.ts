@@ -7,6 +7,7 @@ import type { RouteContract } from '../route-contract.js';
 import { MEMBER_CHECK_COMBINATIONS_EXAMPLE, MEMBER_CHECK_EXAMPLE, MEMBER_CHECK_GIVEN_COMBINATIONS_EXAMPLE, memberCheckRequest } from '../schemas/member-check-request.js';
 import { memberCheckResponse } from '../schemas/member-check-response.js';
 import { parseBody } from '../validation.js';
+import { timedCompute } from '../metrics.js';
 
 export const memberCheckContract: RouteContract = {
   method: 'post',
@@ -30,7 +31,13 @@ export const memberCheckContract: RouteContract = {
 export function memberCheckRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
     app.post('/v1/member-checks', { config: { answerCache: true } }, (request, reply) => {
-      answerOnce(answers, request, reply, () => runMemberCheck(parseBody(memberCheckRequest, request.body), catalogues));
+      answerOnce(answers, request, reply, () =>
+        timedCompute(request, () => {
+          const answer = runMemberCheck(parseBody(memberCheckRequest, request.body), catalogues);
+          request.observed.verdicts = [answer.verdict];
+          return answer;
+        }),
+      );
     });
   };
 }

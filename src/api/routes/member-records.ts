@@ -7,6 +7,7 @@ import type { RouteContract } from '../route-contract.js';
 import { MEMBER_CHECK_EXAMPLE, memberCheckRequest } from '../schemas/member-check-request.js';
 import { htmlDocument, MEMBER_REPORT_EXAMPLE, memberReportRequest, svgDocument } from '../schemas/member-record-exchange.js';
 import { parseBody } from '../validation.js';
+import { timedCompute } from '../metrics.js';
 
 const CHECK_PROBLEMS = ['unknownDesignation', 'unknownGrade', 'unstableMember', 'impossibleGeometry', 'notApplicable', 'tooMuchWork'] as const;
 
@@ -44,10 +45,10 @@ export function memberRecordRoutes(catalogues: Catalogues) {
   return async function register(app: FastifyInstance): Promise<void> {
     app.post('/v1/member-reports', async (request, reply) => {
       const { report, ...check } = parseBody(memberReportRequest, request.body);
-      return reply.type('text/html; charset=utf-8').send(memberReport(check, report, catalogues));
+      return reply.type('text/html; charset=utf-8').send(timedCompute(request, () => memberReport(check, report, catalogues)));
     });
     app.post('/v1/member-diagrams', async (request, reply) => {
-      return reply.type('image/svg+xml; charset=utf-8').send(memberFigure(parseBody(memberCheckRequest, request.body), catalogues));
+      return reply.type('image/svg+xml; charset=utf-8').send(timedCompute(request, () => memberFigure(parseBody(memberCheckRequest, request.body), catalogues)));
     });
   };
 }

@@ -7,6 +7,7 @@ import { runMemberSizing } from '../member-sizing.js';
 import type { RouteContract } from '../route-contract.js';
 import { MEMBER_SIZING_EXAMPLE, memberSizingRequest, memberSizingResponse } from '../schemas/member-sizing-exchange.js';
 import { parseBody } from '../validation.js';
+import { timedCompute } from '../metrics.js';
 
 export const memberSizingContract: RouteContract = {
   method: 'post',
@@ -26,7 +27,7 @@ export const memberSizingContract: RouteContract = {
 export function memberSizingRoutes(catalogues: LoadedCatalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
     app.post('/v1/member-sizing', { config: { answerCache: true } }, (request, reply) => {
-      answerOnce(answers, request, reply, () => runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues));
+      answerOnce(answers, request, reply, () => timedCompute(request, () => runMemberSizing(parseBody(memberSizingRequest, request.body), catalogues)));
     });
   };
 }

@@ -13,6 +13,7 @@ import type { RouteContract } from '../route-contract.js';
 import { SECTION_PROPERTIES_EXAMPLE, sectionPropertiesRequest, sectionPropertiesResponse } from '../schemas/section-properties-exchange.js';
 import { parseBody } from '../validation.js';
 import { sectionPropertiesAudit } from '../audit/input-digest.js';
+import { timedCompute } from '../metrics.js';
 
 export const sectionPropertiesContract: RouteContract = {
   method: 'post',
@@ -32,7 +33,7 @@ export const sectionPropertiesContract: RouteContract = {
 export function sectionPropertiesRoutes(catalogues: Catalogues, answers: AnswerCache) {
   return async function register(app: FastifyInstance): Promise<void> {
     app.post('/v1/section-properties', { config: { answerCache: true } }, (request, reply) => {
-      answerOnce(answers, request, reply, () => sectionPropertiesAnswer(request.body, catalogues));
+      answerOnce(answers, request, reply, () => timedCompute(request, () => sectionPropertiesAnswer(request.body, catalogues)));
     });
   };
 }

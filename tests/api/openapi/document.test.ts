@@ -105,6 +105,7 @@ describe('the OpenAPI document', () => {
     '/v1/materials/{grade}': '/v1/materials/S355',
     '/healthz': '/healthz',
     '/readyz': '/readyz',
+    '/metrics': '/metrics',
   };
 
   describe.each(routeContracts().filter((contract) => contract.method === 'get'))('GET $path', (contract) => {
@@ -113,6 +114,11 @@ describe('the OpenAPI document', () => {
       expect(url, `add a sample URL for ${contract.path}`).toBeDefined();
       const response = await request(app.server).get(url as string);
       expect(response.status).toBe(200);
+      if (contract.responseMediaType === 'text/plain') {
+        expect(response.headers['content-type']).toMatch(/^text\/plain/);
+        expect(contract.response.parse(response.text)).toBe(response.text);
+        return;
+      }
       expect(contract.response.parse(response.body)).toEqual(response.body);
     });
   });

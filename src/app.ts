@@ -80,7 +80,10 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     },
     onProtoPoisoning: 'error',
     onConstructorPoisoning: 'error',
-    return503OnClosing: true,
+    // While closing, a request that still reaches the server on an open connection is answered (with
+    // Connection: close, see graceful-shutdown.ts) rather than refused with Fastify's own 503, whose
+    // body is not a problem; new connections are refused by the closed server.
+    return503OnClosing: false,
     // Errors Fastify raises before routing (a malformed URL, say) are problems too.
     frameworkErrors: (error, _request, reply) => {
       sendProblem(reply, problemFromError(error) ?? new ProblemError('invalidInput', error.message));

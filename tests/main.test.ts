@@ -70,6 +70,51 @@ describe('main', () => {
     expect(code).toBe(0);
   });
 
+  it('on SIGTERM under load answers every request it had accepted, then exits 0', async () => {
+    const { url } = await start({});
+    // 32 clients checking shelf beams back to back, each a different load so nothing comes from the cache.
+    const body = (i: number) => JSON.stringify({ ...JSON.parse(slowBatch()).items[0], loads: [{ type: 'distributed', from: 0, to: 3, qy: -5000 - i }] });
+    type Outcome = { status: number; contentType: string; checks?: number } | { error: string };
+    const sent: { at: number; outcome: Promise<Outcome> }[] = [];
+    let stop = false;
+    let counter = 0;
+    const client = async () => {
+      while (!stop) {
+        const at = performance.now();
+        const outcome: Promise<Outcome> = fetch(`${url}/v1/member-checks`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: body(counter++) }).then(
+          async (response) => {
+            const text = await response.text();
+            const answer = response.status === 200 ? (JSON.parse(text) as { checks: unknown[] }) : undefined;
+            return { status: response.status, contentType: response.headers.get('content-type') ?? '', ...(answer ? { checks: answer.checks.length } : {}) };
+          },
+          (error: unknown) => ({ error: String(error) }),
+        );
+        sent.push({ at, outcome });
+        await outcome;
+      }
+    };
+    const clients = Array.from({ length: 32 }, client);
+    await new Promise((resolve) => setTimeout(resolve, 500));
+    const killedAt = performance.now();
+    child?.kill('SIGTERM');
+    const [code] = (await once(child as ChildProcess, 'exit')) as [number];
+    stop = true;
+    await Promise.all(clients);
+    const outcomes = await Promise.all(sent.map(async ({ at, outcome }) => ({ at, result: await outcome })));
+    // Sent well before the signal (50 ms: the request had reached the server): answered in full.
+    const accepted = outcomes.filter(({ at }) => at < killedAt - 50);
+    expect(accepted.length).toBeGreaterThan(32);
+    for (const { result } of accepted) expect(result).toMatchObject({ status: 200, checks: expect.any(Number) });
+    // Sent after it: answered in full, refused politely (503 problem while closing), or refused at the
+    // connection; never a cut answer.
+    for (const { result } of outcomes) {
+      if (!('status' in result)) continue;
+      if (result.status === 200) expect(result.checks).toBeGreaterThan(0);
+      else expect(result).toMatchObject({ status: 503, contentType: expect.stringMatching(/^application\/problem\+json/) });
+    }
+    expect(code).toBe(0);
+  }, 60_000);
+
   it('refuses to start on a bad company catalogue, naming it', async () => {
     await expect(start({ MEMBERPROOF_CATALOGUES: '/no/such/catalogue.json' })).rejects.toThrow(/no\/such\/catalogue\.json/);
   });

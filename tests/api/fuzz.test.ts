@@ -82,8 +82,13 @@ function assertAnswer(status: number, contentType: string, body: string, sent: u
 
 const posts = routeContracts().filter((contract) => contract.method === 'post' && contract.exampleBody !== undefined);
 
-describe.each(posts)('fuzzing POST $path', (contract) => {
-  const example = contract.exampleBody as Json;
+/** Each route with each of its published examples (the load-combination ones included). */
+const fuzzed = posts.flatMap((contract) => [
+  { path: contract.path, name: 'example', contract, example: contract.exampleBody as Json },
+  ...Object.entries(contract.moreExamples ?? {}).map(([name, example]) => ({ path: contract.path, name, contract, example: example.value as Json })),
+]);
+
+describe.each(fuzzed)('fuzzing POST $path ($name)', ({ contract, example }) => {
   const examplePaths = paths(example);
 
   it('answers random JSON with a problem, never a 5xx', async () => {

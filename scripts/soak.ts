@@ -52,6 +52,11 @@ async function waitUntilReady(url: string): Promise<void> {
   throw new Error('the service did not become ready');
 }
 
+function median(values: readonly number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)] ?? Number.NaN;
+}
+
 const mib = (bytes: number) => `${(bytes / 1048576).toFixed(1)} MiB`;
 
 async function main(): Promise<void> {
@@ -64,7 +69,16 @@ async function main(): Promise<void> {
   await waitUntilReady(url);
   const pid = child.pid as number;
   const rss: number[] = [];
-  const sampler = setInterval(() => rss.push(residentBytes(pid)), 1000);
+  // Once a second: the resident memory, and how long /healthz takes while the load runs.
+  const health: number[] = [];
+  const sampler = setInterval(() => {
+    rss.push(residentBytes(pid));
+    const started = performance.now();
+    fetch(`${url}/healthz`).then(
+      () => health.push(performance.now() - started),
+      () => health.push(Number.NaN),
+    );
+  }, 1000);
   rss.push(residentBytes(pid));
 
   let fresh = 0;
@@ -98,6 +112,7 @@ async function main(): Promise<void> {
     `answers by status: ${statusCounts}; non-2xx: ${result.non2xx}; errors (connection): ${result.errors}; timeouts: ${result.timeouts}`,
     `latency: p50 ${result.latency.p50} ms, p99 ${result.latency.p99} ms, max ${result.latency.max} ms`,
     `resident memory: start ${mib(rss[0] as number)}, after warm-up ${mib(warm[0] as number)}, end ${mib(rss[rss.length - 1] as number)}, largest ${mib(Math.max(...rss))}; drift after warm-up ${mib((rss[rss.length - 1] as number) - (warm[0] as number))}`,
+    `/healthz under load: ${health.length} probes, median ${median(health).toFixed(1)} ms, slowest ${Math.max(...health).toFixed(1)} ms`,
     `SIGTERM: exited with code ${code}`,
   ];
   console.log(lines.join('\n'));

@@ -7,10 +7,9 @@ import { execFile, execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { promisify } from 'node:util';
-import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { testApp } from '../support/test-app.js';
+import { describe, expect, it } from 'vitest';
+import { listeningApp } from '../support/test-app.js';
 
 const SCRIPT = fileURLToPath(new URL('../../examples/curl/check-member.sh', import.meta.url));
 
@@ -39,22 +38,14 @@ describe('examples/curl/check-member.sh', () => {
   });
 
   describe.skipIf(!hasCurl)('against the real server', () => {
-    let app: FastifyInstance;
-    let baseUrl: string;
-    beforeAll(async () => {
-      app = await testApp();
-      baseUrl = await app.listen({ port: 0, host: '127.0.0.1' });
-    });
-    afterAll(async () => {
-      await app.close();
-    });
+    const server = listeningApp();
 
     it('exits 0 and shows the verdict POST /v1/member-checks gives (jq), or the whole answer (no jq)', async () => {
-      const direct = await request(app.server).post('/v1/member-checks').send(scriptRequest());
+      const direct = await request(server.app.server).post('/v1/member-checks').send(scriptRequest());
       expect(direct.status).toBe(200);
 
       // The server runs in this process: execFile, not execFileSync, so it can answer.
-      const { stdout } = await promisify(execFile)('bash', [SCRIPT, baseUrl], { encoding: 'utf8', timeout: 30000 });
+      const { stdout } = await promisify(execFile)('bash', [SCRIPT, server.baseUrl], { encoding: 'utf8', timeout: 30000 });
       expect(stdout).toMatch(new RegExp(`"?verdict"?:\\s*"?${direct.body.verdict}\\b`));
     });
   });

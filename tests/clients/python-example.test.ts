@@ -10,10 +10,9 @@ import { readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import { promisify } from 'node:util';
-import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { testApp } from '../support/test-app.js';
+import { describe, expect, it } from 'vitest';
+import { listeningApp } from '../support/test-app.js';
 
 const SCRIPT = fileURLToPath(new URL('../../examples/python/check_member.py', import.meta.url));
 
@@ -49,21 +48,13 @@ function scriptRequest(): unknown {
 }
 
 describe.skipIf(!hasPython)('examples/python/check_member.py', () => {
-  let app: FastifyInstance;
-  let baseUrl: string;
-  beforeAll(async () => {
-    app = await testApp();
-    baseUrl = await app.listen({ port: 0, host: '127.0.0.1' });
-  });
-  afterAll(async () => {
-    await app.close();
-  });
+  const server = listeningApp();
 
   it('prints the verdict and governing mode that POST /v1/member-checks answers, and exits 0', async () => {
-    const direct = await request(app.server).post('/v1/member-checks').send(scriptRequest() as object);
+    const direct = await request(server.app.server).post('/v1/member-checks').send(scriptRequest() as object);
     expect(direct.status).toBe(200);
 
-    const { code, stdout } = await runScript(baseUrl);
+    const { code, stdout } = await runScript(server.baseUrl);
     expect(code).toBe(0);
     expect(stdout).toContain(`verdict: ${direct.body.verdict}`);
     expect(stdout).toContain(`governing: ${direct.body.governing.mode} at utilization ${direct.body.governing.utilization.toFixed(3)}`);
@@ -72,7 +63,7 @@ describe.skipIf(!hasPython)('examples/python/check_member.py', () => {
 
   it('prints the problem title, detail and pointer of a refused request, and exits 2', async () => {
     // A base URL under a path the service does not have: it answers 404 not-found as problem+json.
-    const { code, stderr } = await runScript(`${baseUrl}/no-such-prefix`);
+    const { code, stderr } = await runScript(`${server.baseUrl}/no-such-prefix`);
     expect(code).toBe(2);
     expect(stderr).toContain('HTTP 404 No such resource');
   });

@@ -8,9 +8,8 @@ import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { fileURLToPath } from 'node:url';
-import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { CLIENT_SCHEMA_PATH, generatedClientSchemaText } from '../../scripts/generate-client.js';
 import {
   baseUrlFrom,
@@ -21,7 +20,7 @@ import {
   type MemberOutcome,
 } from '../../examples/typescript/check-three-members.js';
 import { createMemberproofClient } from '../../clients/typescript/index.js';
-import { testApp } from '../support/test-app.js';
+import { listeningApp } from '../support/test-app.js';
 
 const REPOSITORY = fileURLToPath(new URL('../../', import.meta.url));
 const TSC = fileURLToPath(new URL('../../node_modules/.bin/tsc', import.meta.url));
@@ -58,23 +57,15 @@ describe('the example and the client against the generated types', () => {
 });
 
 describe('examples/typescript/check-three-members.ts against the real server', () => {
-  let app: FastifyInstance;
-  let baseUrl: string;
-  beforeAll(async () => {
-    app = await testApp();
-    baseUrl = await app.listen({ port: 0, host: '127.0.0.1' });
-  });
-  afterAll(async () => {
-    await app.close();
-  });
+  const server = listeningApp();
 
   it('reports for each member the verdict, governing mode and utilization that POST /v1/member-checks answers', async () => {
     const lines: string[] = [];
-    const outcomes = await main(baseUrl, { log: (line) => lines.push(line) });
+    const outcomes = await main(server.baseUrl, { log: (line) => lines.push(line) });
 
     expect(outcomes).toHaveLength(3);
     for (const [index, scenario] of SCENARIOS.entries()) {
-      const direct = await request(app.server).post('/v1/member-checks').send(scenario.body);
+      const direct = await request(server.app.server).post('/v1/member-checks').send(scenario.body);
       expect(direct.status).toBe(200);
       const outcome = outcomes[index];
       expect(outcome?.kind).toBe('answer');
@@ -97,7 +88,7 @@ describe('examples/typescript/check-three-members.ts against the real server', (
       return fetch(outgoing.url, { method: outgoing.method, headers: outgoing.headers, body: text });
     };
     const lines: string[] = [];
-    const outcomes = await main(baseUrl, { fetchImpl: misspelling, log: (line) => lines.push(line) });
+    const outcomes = await main(server.baseUrl, { fetchImpl: misspelling, log: (line) => lines.push(line) });
 
     const joist = outcomes[1] as Extract<MemberOutcome, { kind: 'problem' }>;
     expect(joist.kind).toBe('problem');
@@ -115,7 +106,7 @@ describe('examples/typescript/check-three-members.ts against the real server', (
   });
 
   it('types the client by the contract: GET /healthz through createMemberproofClient', async () => {
-    const { data, error } = await createMemberproofClient(`${baseUrl}/`).GET('/healthz');
+    const { data, error } = await createMemberproofClient(`${server.baseUrl}/`).GET('/healthz');
     expect(error).toBeUndefined();
     expect(data?.status).toBe('alive');
   });

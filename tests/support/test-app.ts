@@ -1,6 +1,7 @@
 /** One app and one set of catalogues per test file, built the way main.ts builds them. */
 
 import type { FastifyInstance } from 'fastify';
+import { afterAll, beforeAll } from 'vitest';
 import { buildApp, type AppOptions } from '../../src/app.js';
 import { loadCatalogues, type LoadedCatalogues } from '../../src/api/load-catalogues.js';
 
@@ -13,4 +14,17 @@ export function embeddedCatalogues(): Promise<LoadedCatalogues> {
 
 export async function testApp(options: AppOptions = {}): Promise<FastifyInstance> {
   return buildApp({ catalogues: await embeddedCatalogues(), ...options });
+}
+
+/** An app listening on a free local port for the describe block it is called in: for clients that need a URL. */
+export function listeningApp(): { readonly app: FastifyInstance; readonly baseUrl: string } {
+  const state = {} as { app: FastifyInstance; baseUrl: string };
+  beforeAll(async () => {
+    state.app = await testApp();
+    state.baseUrl = await state.app.listen({ port: 0, host: '127.0.0.1' });
+  });
+  afterAll(async () => {
+    await state.app?.close();
+  });
+  return state;
 }

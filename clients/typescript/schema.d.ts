@@ -2264,56 +2264,25 @@ export interface components {
             /** @description 1 to 1000 member checks; more is a 413 problem. Each is checked on its own: one bad item never fails the batch. Set output.samples low to keep the answer small. */
             items: components["schemas"]["BatchItem"][];
         };
-        /**
-         * @description A member-check request with an optional id.
-         * @example {
-         *       "member": {
-         *         "length": "3.6 m",
-         *         "supports": [
-         *           {
-         *             "position": 0,
-         *             "type": "pinned"
-         *           },
-         *           {
-         *             "position": "3.6 m",
-         *             "type": "roller"
-         *           }
-         *         ]
-         *       },
-         *       "section": {
-         *         "designation": "IPE 200"
-         *       },
-         *       "material": {
-         *         "grade": "S355"
-         *       },
-         *       "loads": [
-         *         {
-         *           "type": "distributed",
-         *           "from": 0,
-         *           "to": "3.6 m",
-         *           "qy": "-4.5 kN/m",
-         *           "label": "decking and stored goods"
-         *         },
-         *         {
-         *           "type": "point",
-         *           "position": "1.2 m",
-         *           "fy": "-6 kN",
-         *           "label": "pallet truck wheel"
-         *         }
-         *       ],
-         *       "selfWeight": true,
-         *       "output": {
-         *         "samples": 11,
-         *         "units": {
-         *           "length": "mm",
-         *           "force": "kN",
-         *           "moment": "kN*m",
-         *           "stress": "MPa"
-         *         }
-         *       }
-         *     }
-         */
-        BatchItem: components["schemas"]["MemberCheckRequest"] & {
+        /** @description A member-check request with an optional id. */
+        BatchItem: {
+            member: components["schemas"]["Member"];
+            section: components["schemas"]["SectionInput"];
+            material: components["schemas"]["MaterialInput"] & unknown;
+            /** @description Point and distributed loads, one load state; an empty list is allowed (with selfWeight, or to see the section and material). Default empty. Must be empty when the loads come in loadCases or movingLoads. */
+            loads?: components["schemas"]["Load"][];
+            /** @description Loads grouped by origin, 0 to 50. With load cases or moving loads, loads must be empty; selfWeight becomes a permanent case of its own, "selfWeight". */
+            loadCases?: components["schemas"]["LoadCase"][];
+            /** @description 0 to 10 moving loads. */
+            movingLoads?: components["schemas"]["MovingLoad"][];
+            /** @description 1 to 100 combinations. Default: built from the categories (common practice in the allowable-stress format, a placeholder for the governing code; see the README). The answer says which set was used. Over all combinations at most 10000 load states (train positions searched, 1 for a combination without a moving load): beyond, a 422. */
+            combinations?: components["schemas"]["Combination"][];
+            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false. */
+            selfWeight?: boolean;
+            criteria?: components["schemas"]["Criteria"];
+            buckling?: components["schemas"]["BucklingOptions"];
+            lateralTorsional?: components["schemas"]["LateralTorsionalOptions"];
+            output?: components["schemas"]["OutputOptions"];
             /** @description The caller's own reference for the item (a quote line, a configuration id), echoed with its result. */
             id?: string | number;
         };
@@ -2526,7 +2495,24 @@ export interface components {
          *       }
          *     }
          */
-        MemberReportRequest: components["schemas"]["MemberCheckRequest"] & {
+        MemberReportRequest: {
+            member: components["schemas"]["Member"];
+            section: components["schemas"]["SectionInput"];
+            material: components["schemas"]["MaterialInput"] & unknown;
+            /** @description Point and distributed loads, one load state; an empty list is allowed (with selfWeight, or to see the section and material). Default empty. Must be empty when the loads come in loadCases or movingLoads. */
+            loads?: components["schemas"]["Load"][];
+            /** @description Loads grouped by origin, 0 to 50. With load cases or moving loads, loads must be empty; selfWeight becomes a permanent case of its own, "selfWeight". */
+            loadCases?: components["schemas"]["LoadCase"][];
+            /** @description 0 to 10 moving loads. */
+            movingLoads?: components["schemas"]["MovingLoad"][];
+            /** @description 1 to 100 combinations. Default: built from the categories (common practice in the allowable-stress format, a placeholder for the governing code; see the README). The answer says which set was used. Over all combinations at most 10000 load states (train positions searched, 1 for a combination without a moving load): beyond, a 422. */
+            combinations?: components["schemas"]["Combination"][];
+            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false. */
+            selfWeight?: boolean;
+            criteria?: components["schemas"]["Criteria"];
+            buckling?: components["schemas"]["BucklingOptions"];
+            lateralTorsional?: components["schemas"]["LateralTorsionalOptions"];
+            output?: components["schemas"]["OutputOptions"];
             report: components["schemas"]["ReportMeta"];
         };
         /** @description What the record is for; printed escaped. */

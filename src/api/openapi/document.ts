@@ -66,7 +66,7 @@ export function buildOpenApiDocument(contracts: readonly RouteContract[]) {
     });
   }
   const generator = new OpenApiGeneratorV31(registry.definitions);
-  return generator.generateDocument({
+  return withExactTuples(generator.generateDocument({
     openapi: '3.1.0',
     info: {
       title: 'Memberproof',
@@ -75,7 +75,31 @@ export function buildOpenApiDocument(contracts: readonly RouteContract[]) {
         'Screening calculations for straight structural and machine members: reactions, shear-force, bending-moment and deflection diagrams, stresses, column buckling (Euler or Johnson), every failure check with its utilization, the governing failure, and the lightest catalogue section that passes. Quantities are numbers in SI units or strings with a unit ("250 mm", "12 kN"). Axes: x along the member, y up, z horizontal. CAUTION: screening calculations for qualified people; the design must be verified to the governing local code by a licensed engineer.',
     },
     servers: [{ url: '/' }],
-  });
+  }));
 }
 
 export type OpenApiDocument = ReturnType<typeof buildOpenApiDocument>;
+
+/**
+ * A tuple (a linear intensity [at from, at to]) is published as prefixItems alone, which JSON Schema
+ * 2020-12 reads as "at least these, then anything": the service takes exactly the tuple's length, so
+ * the document says so (items false, min and max items).
+ */
+function withExactTuples<T>(document: T): T {
+  const visit = (node: unknown): void => {
+    if (Array.isArray(node)) {
+      node.forEach(visit);
+      return;
+    }
+    if (node === null || typeof node !== 'object') return;
+    const schema = node as Record<string, unknown>;
+    if (Array.isArray(schema.prefixItems) && schema.items === undefined) {
+      schema.items = false;
+      schema.minItems = schema.prefixItems.length;
+      schema.maxItems = schema.prefixItems.length;
+    }
+    Object.values(schema).forEach(visit);
+  };
+  visit(document);
+  return document;
+}

@@ -1,14 +1,15 @@
 /** POST /v1/member-checks/batch: many member checks in one request, each answered on its own. */
 
-import { MEMBER_CHECK_EXAMPLE, memberCheckRequest } from './member-check-request.js';
+import { MEMBER_CHECK_EXAMPLE, memberCheckFields } from './member-check-request.js';
 import { memberCheckResponse, notices } from './member-check-response.js';
 import { problemOutput } from './problem.js';
 import { z } from './zod.js';
 
 export const MAX_BATCH_ITEMS = 1000;
 
-export const batchItem = memberCheckRequest
-  .extend({
+export const batchItem = z
+  .strictObject({
+    ...memberCheckFields,
     id: z
       .union([z.string().min(1).max(128), z.number().int()])
       .optional()

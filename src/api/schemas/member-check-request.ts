@@ -68,24 +68,32 @@ export const MEMBER_CHECK_GIVEN_COMBINATIONS_EXAMPLE = {
   criteria: { deflectionLimitRatio: 500 },
 };
 
+/**
+ * The fields of a member check. Requests that add fields of their own (a batch item's id, a report's
+ * job) spread these into a strict object of their own rather than extending MemberCheckRequest: an
+ * extension is published as allOf of two objects that each refuse the other's fields, which no
+ * request can satisfy.
+ */
+export const memberCheckFields = {
+  member: memberInput,
+  section: sectionInput,
+  material: materialInput,
+  loads: loadsInput
+    .optional()
+    .openapi({ description: 'Point and distributed loads, one load state; an empty list is allowed (with selfWeight, or to see the section and material). Default empty. Must be empty when the loads come in loadCases or movingLoads.' }),
+  ...loadCombinationFields,
+  selfWeight: z
+    .boolean()
+    .optional()
+    .openapi({ description: 'Add the member\'s own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false.' }),
+  criteria: criteriaInput.optional(),
+  buckling: bucklingInput.optional(),
+  lateralTorsional: lateralTorsionalInput.optional(),
+  output: outputOptions.optional(),
+};
+
 export const memberCheckRequest = z
-  .strictObject({
-    member: memberInput,
-    section: sectionInput,
-    material: materialInput,
-    loads: loadsInput
-      .optional()
-      .openapi({ description: 'Point and distributed loads, one load state; an empty list is allowed (with selfWeight, or to see the section and material). Default empty. Must be empty when the loads come in loadCases or movingLoads.' }),
-    ...loadCombinationFields,
-    selfWeight: z
-      .boolean()
-      .optional()
-      .openapi({ description: 'Add the member\'s own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false.' }),
-    criteria: criteriaInput.optional(),
-    buckling: bucklingInput.optional(),
-    lateralTorsional: lateralTorsionalInput.optional(),
-    output: outputOptions.optional(),
-  })
+  .strictObject(memberCheckFields)
   .openapi('MemberCheckRequest', {
     description: 'A straight member to analyse and check.',
     example: MEMBER_CHECK_EXAMPLE,

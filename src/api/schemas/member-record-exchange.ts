@@ -1,6 +1,6 @@
 /** POST /v1/member-reports and /v1/member-diagrams: a member check's request, answered as an HTML record or an SVG figure. */
 
-import { MEMBER_CHECK_EXAMPLE, memberCheckRequest } from './member-check-request.js';
+import { MEMBER_CHECK_EXAMPLE, memberCheckFields } from './member-check-request.js';
 import { z } from './zod.js';
 
 export const reportMeta = z
@@ -11,8 +11,8 @@ export const reportMeta = z
   })
   .openapi('ReportMeta', { description: 'What the record is for; printed escaped.' });
 
-export const memberReportRequest = memberCheckRequest
-  .extend({ report: reportMeta })
+export const memberReportRequest = z
+  .strictObject({ ...memberCheckFields, report: reportMeta })
   .openapi('MemberReportRequest', {
     description: 'A member check (as POST /v1/member-checks takes it) and the job it belongs to.',
     example: { ...MEMBER_CHECK_EXAMPLE, report: { title: 'Work platform WP-12, joist J3', reference: 'Q-2026-0412', preparedBy: 'A. Engineer' } },

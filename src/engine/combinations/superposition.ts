@@ -9,7 +9,7 @@
 
 import { extremesOfField } from '../analysis/field-extremes.js';
 import type { DiagramField, FieldExtremes, MemberAnalysis, MemberPiece, Polynomial } from '../analysis/result.js';
-import { POSITION_TOLERANCE } from '../analysis/tolerances.js';
+import { LOAD_POSITION_TOLERANCE } from '../analysis/tolerances.js';
 
 /** Coefficients of p(s + shift), ascending: repeated synthetic division (Taylor shift, Horner's scheme). */
 export function shiftedPolynomial(p: Polynomial, shift: number): number[] {
@@ -37,10 +37,10 @@ function pieceHolding(pieces: readonly MemberPiece[], x: number, from: number): 
 
 /**
  * Visits every piece of the merged node set, with the piece of each analysis that holds it. Nodes of the
- * two closer than the node tolerance are one node, as the analysis itself merges them.
+ * two closer than the load-position tolerance are one node, as the analysis merges a load with a node.
  */
 function forEachMergedPiece(fixed: MemberAnalysis, train: MemberAnalysis, visit: (start: number, end: number, a: MemberPiece, b: MemberPiece) => void): void {
-  const tolerance = POSITION_TOLERANCE * fixed.length;
+  const tolerance = LOAD_POSITION_TOLERANCE * fixed.length;
   const all = [...fixed.nodes, ...train.nodes].sort((x, y) => x - y);
   const nodes: number[] = [];
   for (const x of all) if (nodes.length === 0 || x - (nodes[nodes.length - 1] as number) > tolerance) nodes.push(x);

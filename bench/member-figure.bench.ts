@@ -54,7 +54,7 @@ async function figureInputOf(body: { member: { length: number; supports: { posit
     distributedLoads: loads
       .filter((l) => l.type === 'distributed')
       .map((l) => ({ from: l.from ?? 0, to: l.to ?? 0, qy: [l.qy ?? 0, l.qy ?? 0] as const, qz: [l.qz ?? 0, l.qz ?? 0] as const })),
-    diagrams: answer.diagrams,
+    diagrams: answer.diagrams as NonNullable<typeof answer.diagrams>,
     extremes: answer.extremes,
   };
 }

@@ -301,7 +301,7 @@ export interface components {
                 /** @description Node positions of the analysis (ends, supports, hinges, point loads, ends of distributed loads), in the length unit. */
                 nodes: number[];
             };
-            section: components["schemas"]["ResolvedSection"];
+            section?: components["schemas"]["ResolvedSection"];
             material: components["schemas"]["Material"];
             /** @description Whether the member's own weight was added. */
             selfWeight: {
@@ -312,7 +312,7 @@ export interface components {
             };
             /** @description One per support, in the order given. */
             reactions: components["schemas"]["Reaction"][];
-            diagrams: components["schemas"]["Diagrams"];
+            diagrams?: components["schemas"]["Diagrams"];
             extremes: components["schemas"]["Extremes"];
             equilibrium: components["schemas"]["Equilibrium"];
             /** @description Every applicable failure check. */
@@ -408,6 +408,7 @@ export interface components {
             /** @description Unit of every torsionalShearPerTorque value in this response (SI: m^-3). */
             torsionalShearPerTorque: string;
         };
+        /** @description The section as resolved, with its properties; absent with output.detail "summary". */
         ResolvedSection: {
             /** @description The catalogue designation, when the section came from a catalogue. */
             designation?: string;
@@ -556,6 +557,7 @@ export interface components {
             /** @description Moment the support applies about +z, right-hand rule (counterclockwise seen from +z). In the response's moment unit (SI: N*m). */
             mz: number;
         };
+        /** @description The sampled diagrams; absent with output.detail "summary". */
         Diagrams: {
             /** @description Positions, in the length unit: the evenly spaced samples and every node; at a jump a position appears twice, the value just left first. */
             x: number[];
@@ -815,10 +817,10 @@ export interface components {
             }[];
             /** @description Every combination checked, in order. */
             combinations: components["schemas"]["CombinationResult"][];
-            /** @description The envelope of every combination of each purpose, over every train position (exact). */
-            envelope: {
-                strength?: components["schemas"]["DiagramEnvelope"];
-                serviceability?: components["schemas"]["DiagramEnvelope"];
+            /** @description The envelope of every combination of each purpose, over every train position (exact); absent with output.detail "summary". */
+            envelope?: {
+                strength?: components["schemas"]["DiagramEnvelope"] & unknown;
+                serviceability?: components["schemas"]["DiagramEnvelope"] & unknown;
             };
         };
         /** @description A support's reactions at their extremes over the combinations. */
@@ -989,7 +991,7 @@ export interface components {
                 extremes: components["schemas"]["MovingLoadExtremes"];
                 /** @description One per support, in the order given. */
                 reactions: components["schemas"]["ReactionEnvelope"][];
-                envelope: components["schemas"]["DiagramEnvelope"];
+                envelope?: components["schemas"]["DiagramEnvelope"];
             };
             /** @description At the governing train position when a train moves. */
             reactions: components["schemas"]["Reaction"][];
@@ -1327,7 +1329,7 @@ export interface components {
                 };
             };
         };
-        /** @description Largest and smallest value of each diagram at fixed positions over several load states. */
+        /** @description The envelope over every train position; absent with output.detail "summary". */
         DiagramEnvelope: {
             /** @description Positions, in the length unit: the evenly spaced samples and every fixed node (supports, hinges, load-case load points and ends); an interior node appears twice, the value just left first. */
             x: number[];
@@ -2181,6 +2183,13 @@ export interface components {
             /** @description Evenly spaced diagram points from 0 to the length, default 101, at most 10001; every node is added, twice where a diagram jumps. */
             samples?: number;
             units?: components["schemas"]["OutputUnits"];
+            /**
+             * @description full (default): everything. summary: the verdict, governing check, checks, reactions and extremes, without the sampled diagrams, the echoed section table and the envelopes of load combinations: a small answer for a configurator or a large batch.
+             * @enum {string}
+             */
+            detail?: "full" | "summary";
+            /** @description Round every presented quantity (lengths, forces, stresses, diagram values...) to this many significant digits; the calculation is not rounded. Utilizations, safety factors and other ratios are never rounded, so a verdict always reads as its number. */
+            significantDigits?: number;
         };
         /** @description SI (default); US (in, kip, kip*ft, ksi, kip/ft, in^4...); or a unit per kind of quantity (kinds not named stay SI, except that deflections follow the length unit, and area, section moduli, second moments and the warping constant follow a plain length unit as its powers). The response echoes the units used in `units`. */
         OutputUnits: ("SI" | "US") | components["schemas"]["UnitMap"];

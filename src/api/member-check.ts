@@ -25,7 +25,7 @@ import { asksForCombinations, readCombinations, resolveCombinations, type Normal
 import { normaliseLoads, normaliseMember, type NormalisedMember } from './normalise/member.js';
 import { QuantityReader, type Path } from './normalise/quantity-reader.js';
 import { resolveSection, type ResolvedSection } from './normalise/section.js';
-import { resolveOutputUnits, present, type OutputUnits } from './output-units.js';
+import { resolveOutputUnits, present, withSignificantDigits, type OutputUnits } from './output-units.js';
 import { presentDiagrams, presentEquilibrium, presentExtremes, presentReactions } from './present/analysis.js';
 import { presentChecks } from './present/checks.js';
 import { presentLoadCombinations } from './present/load-combinations.js';
@@ -52,6 +52,8 @@ export interface NormalisedCheck {
   readonly selfWeight: boolean;
   readonly samples: number;
   readonly units: OutputUnits;
+  /** output.detail: summary leaves out the diagrams, the section table and the envelopes. */
+  readonly detail: 'full' | 'summary';
   readonly material: MaterialResolver;
   readonly criteria: CriteriaInput;
   readonly buckling: BucklingInput;
@@ -72,7 +74,7 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
   const buckling = normaliseBuckling(request.buckling, reader, [...base, 'buckling']);
   const lateralTorsional = normaliseLateralTorsional(request.lateralTorsional, reader, [...base, 'lateralTorsional']);
   const pins = normalisePins(request.member.supports, catalogues.materials, reader, [...base, 'member', 'supports']);
-  const units = resolveOutputUnits(request.output?.units, [...base, 'output', 'units']);
+  const units = withSignificantDigits(resolveOutputUnits(request.output?.units, [...base, 'output', 'units']), request.output?.significantDigits);
   reader.finish();
   const samples = request.output?.samples ?? DEFAULT_SAMPLES;
   const combinations = combinationsRead === null ? null : resolveCombinations(request, combinationsRead, member, samples, base);
@@ -84,6 +86,7 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
     selfWeight: request.selfWeight ?? false,
     samples,
     units,
+    detail: request.output?.detail ?? 'full',
     material,
     criteria,
     buckling,
@@ -180,23 +183,23 @@ function checkCombinationsWithSection(
 export function presentCheck(check: NormalisedCheck, checked: CheckedMember): MemberCheckResponse {
   const { units } = check;
   const { section, material, analysis, outcome } = checked;
-  const diagrams = sampleDiagrams(analysis, check.samples);
+  const summary = check.detail === 'summary';
   const selfWeightIntensity = check.selfWeight ? -selfWeightLoad(section.properties.area, material.density, analysis.length).qy[0] : 0;
   return {
     units: units.names,
     member: { length: present(units, 'length', analysis.length), nodes: analysis.nodes.map((x) => present(units, 'length', x)) },
-    section: presentSection(section, units, material.density),
+    section: summary ? undefined : presentSection(section, units, material.density),
     material: presentMaterial(material, units),
     selfWeight: { applied: check.selfWeight, intensity: present(units, 'forcePerLength', selfWeightIntensity) },
     reactions: presentReactions(analysis, check.supportLabels, units),
-    diagrams: presentDiagrams(diagrams, units),
+    diagrams: summary ? undefined : presentDiagrams(sampleDiagrams(analysis, check.samples), units),
     extremes: presentExtremes(analysis, units),
     equilibrium: presentEquilibrium(analysis, units),
     ...presentChecks(outcome, units, checked.combinations?.worstChecks),
     loadCombinations:
       checked.combinations === null || check.combinations === null
         ? undefined
-        : presentLoadCombinations(check.combinations, checked.combinations, check.supportLabels, units),
+        : presentLoadCombinations(check.combinations, checked.combinations, check.supportLabels, units, check.detail),
     notices: [...outcome.notices],
     audit: memberCheckAudit(check, section, material),
   };

@@ -93,14 +93,20 @@ function reportLoads(check: NormalisedCheck, answer: MemberCheckResponse): Repor
   ];
 }
 
-export function memberFigure(request: MemberCheckRequest, catalogues: Catalogues): string {
+/** A request's check, always in full detail: a rendering draws the diagrams whatever output.detail says. */
+function fullCheck(request: MemberCheckRequest, catalogues: Catalogues): { check: NormalisedCheck; checked: CheckedMember } {
   const { check, checked } = checkRequest(request, catalogues);
+  return { check: { ...check, detail: 'full' }, checked };
+}
+
+export function memberFigure(request: MemberCheckRequest, catalogues: Catalogues): string {
+  const { check, checked } = fullCheck(request, catalogues);
   return memberFigureSvg(figureInput(request, check, checked, presentCheck(check, checked)));
 }
 
 /** Everything the record is drawn from: the checked member, its answer and its figure. */
 export function memberReportInput(request: MemberCheckRequest, meta: ReportMeta, catalogues: Catalogues): ReportInput {
-  const { check, checked } = checkRequest(request, catalogues);
+  const { check, checked } = fullCheck(request, catalogues);
   const answer = presentCheck(check, checked);
   return {
     meta,

@@ -36,6 +36,19 @@ export interface OutputUnits {
   readonly names: Readonly<Record<QuantityKind, string>>;
   /** SI units per presented unit. */
   readonly factors: Readonly<Record<QuantityKind, number>>;
+  /** Significant digits every presented quantity is rounded to (output.significantDigits); none by default. */
+  readonly significantDigits?: number;
+}
+
+/** The same units, every presented quantity rounded to `digits` significant digits. */
+export function withSignificantDigits(units: OutputUnits, digits: number | undefined): OutputUnits {
+  return digits === undefined ? units : { ...units, significantDigits: digits };
+}
+
+/** `value` to `digits` significant digits (none: as it is); -0 becomes 0. */
+export function rounded(value: number, digits: number | undefined): number {
+  const result = digits === undefined ? value : Number(value.toPrecision(digits));
+  return result === 0 ? 0 : result;
 }
 
 function build(names: Record<QuantityKind, string>): OutputUnits {
@@ -89,5 +102,6 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
 /** An SI value in the presented unit; -0 becomes 0. */
 export function present(units: OutputUnits, kind: QuantityKind, valueSI: number): number {
   const value = valueSI / units.factors[kind];
+  if (units.significantDigits !== undefined) return rounded(value, units.significantDigits);
   return value === 0 ? 0 : value;
 }

@@ -45,7 +45,8 @@ function checkForm(check: NormalisedCheck) {
     buckling: check.buckling,
     lateralTorsional: check.lateralTorsional,
     pins: check.pins,
-    output: { samples: check.samples, units: check.units.names },
+    // Defaults are left out, as everywhere in the form: a request that names them has the default's digest.
+    output: { samples: check.samples, units: check.units.names, detail: check.detail === 'summary' ? 'summary' : undefined, significantDigits: check.units.significantDigits },
   };
 }
 

@@ -2,7 +2,7 @@
 
 import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis } from '../../engine/analysis/result.js';
 import type { SampledDiagrams } from '../../engine/analysis/sample-diagrams.js';
-import { present, type OutputUnits } from '../output-units.js';
+import { present, rounded, type OutputUnits } from '../output-units.js';
 import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
 
 export function presentReactions(analysis: MemberAnalysis, labels: readonly (string | undefined)[], units: OutputUnits) {
@@ -23,19 +23,19 @@ export function presentReactions(analysis: MemberAnalysis, labels: readonly (str
  * array is packed: JSON.stringify writes a packed array of doubles about a quarter faster than a holey
  * one. In SI (factor 1) the column is sent as it is: x / 1 is x, and JSON writes -0 as 0.
  */
-function presentColumn(values: readonly number[], factor: number): readonly number[] {
-  if (factor === 1) return values;
+function presentColumn(values: readonly number[], factor: number, digits: number | undefined): readonly number[] {
+  if (factor === 1 && digits === undefined) return values;
   const out: number[] = [];
   for (let i = 0; i < values.length; i++) {
     const value = (values[i] as number) / factor;
-    out.push(value === 0 ? 0 : value);
+    out.push(digits === undefined ? (value === 0 ? 0 : value) : rounded(value, digits));
   }
   return out;
 }
 
 export function presentDiagrams(diagrams: SampledDiagrams, units: OutputUnits) {
-  const out: Record<string, readonly number[]> = { x: presentColumn(diagrams.x, units.factors.length) };
-  for (const field of DIAGRAM_FIELDS) out[field] = presentColumn(diagrams.values[field], units.factors[DIAGRAM_FIELD_INFO[field].kind]);
+  const out: Record<string, readonly number[]> = { x: presentColumn(diagrams.x, units.factors.length, units.significantDigits) };
+  for (const field of DIAGRAM_FIELDS) out[field] = presentColumn(diagrams.values[field], units.factors[DIAGRAM_FIELD_INFO[field].kind], units.significantDigits);
   return out as Record<'x' | DiagramField, number[]>;
 }
 

@@ -5,7 +5,7 @@ import type { CombinationsOutcome, CombinedReactionBound } from '../../engine/co
 import { REACTION_COMPONENTS, type ReactionBound, type ReactionComponent } from '../../engine/combinations/train-envelope.js';
 import type { DiagramEnvelope } from '../../engine/combinations/diagram-envelope.js';
 import type { NormalisedCombinations } from '../normalise/load-combinations.js';
-import { present, type OutputUnits } from '../output-units.js';
+import { present, rounded, type OutputUnits } from '../output-units.js';
 import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
 import { presentExtremes, presentReactions } from './analysis.js';
 import { presentCheckList, presentGoverning } from './checks.js';
@@ -16,11 +16,8 @@ export const DEFAULT_SET_BASIS =
   'Default set, common practice in the allowable-stress format (a placeholder for the governing code; after ASCE/SEI 7, 2.4.1 and 2.5.2, from memory): strength G; G + Q for each variable action; G + 0.75 (the variable actions together, one wind direction and one moving load at a time); 0.6 G + W for each wind action (wind at its characteristic, service-level value); G + A + 0.5 (imposed and other) + 0.2 (snow) for each accidental action. Serviceability, unfactored: G when nothing varies; G + Q for each variable action; G + the variable actions together, chosen as for strength. Loads at characteristic values; the required safety factors apply to the resistance.';
 const GIVEN_SET_BASIS = 'The combinations given in the request, each action times its factor (superposition).';
 
-function presentColumn(values: readonly number[], factor: number): number[] {
-  return values.map((value) => {
-    const presented = value / factor;
-    return presented === 0 ? 0 : presented;
-  });
+function presentColumn(values: readonly number[], factor: number, digits: number | undefined): number[] {
+  return values.map((value) => rounded(value / factor, digits));
 }
 
 export function presentEnvelope(envelope: DiagramEnvelope, units: OutputUnits) {
@@ -28,10 +25,10 @@ export function presentEnvelope(envelope: DiagramEnvelope, units: OutputUnits) {
   const min = {} as Record<DiagramField, number[]>;
   for (const field of DIAGRAM_FIELDS) {
     const factor = units.factors[DIAGRAM_FIELD_INFO[field].kind];
-    max[field] = presentColumn(envelope.max[field], factor);
-    min[field] = presentColumn(envelope.min[field], factor);
+    max[field] = presentColumn(envelope.max[field], factor, units.significantDigits);
+    min[field] = presentColumn(envelope.min[field], factor, units.significantDigits);
   }
-  return { x: presentColumn(envelope.x, units.factors.length), max, min };
+  return { x: presentColumn(envelope.x, units.factors.length, units.significantDigits), max, min };
 }
 
 function presentBounds(bounds: Readonly<Record<ReactionComponent, ReactionBound>>, units: OutputUnits) {
@@ -56,7 +53,8 @@ function presentCombinedBounds(bounds: Readonly<Record<ReactionComponent, Combin
   return out;
 }
 
-export function presentLoadCombinations(normalised: NormalisedCombinations, outcome: CombinationsOutcome, labels: readonly (string | undefined)[], units: OutputUnits) {
+export function presentLoadCombinations(normalised: NormalisedCombinations, outcome: CombinationsOutcome, labels: readonly (string | undefined)[], units: OutputUnits, detail: 'full' | 'summary' = 'full') {
+  const summary = detail === 'summary';
   const length = (value: number) => present(units, 'length', value);
   return {
     set: normalised.set,
@@ -101,16 +99,18 @@ export function presentLoadCombinations(normalised: NormalisedCombinations, outc
                   max: presentBounds(reaction.max, units),
                   min: presentBounds(reaction.min, units),
                 })),
-                envelope: presentEnvelope(result.envelope as DiagramEnvelope, units),
+                envelope: summary ? undefined : presentEnvelope(result.envelope as DiagramEnvelope, units),
               },
         reactions: presentReactions(state.analysis, labels, units),
         extremes: presentExtremes(state.analysis, units),
         checks: presentCheckList(state.outcome.checks, units),
       };
     }),
-    envelope: {
-      strength: outcome.envelopes.strength === null ? undefined : presentEnvelope(outcome.envelopes.strength, units),
-      serviceability: outcome.envelopes.serviceability === null ? undefined : presentEnvelope(outcome.envelopes.serviceability, units),
-    },
+    envelope: summary
+      ? undefined
+      : {
+          strength: outcome.envelopes.strength === null ? undefined : presentEnvelope(outcome.envelopes.strength, units),
+          serviceability: outcome.envelopes.serviceability === null ? undefined : presentEnvelope(outcome.envelopes.serviceability, units),
+        },
   };
 }

@@ -95,7 +95,7 @@ const combinationOutput = z
         positionsSearched: z.number().int().openapi({ description: 'Train positions checked on the grid and at the nodes, before the refinement.' }),
         extremes: movingExtremes,
         reactions: z.array(reactionEnvelope).openapi({ description: 'One per support, in the order given.' }),
-        envelope: diagramEnvelopeOutput,
+        envelope: diagramEnvelopeOutput.optional().openapi({ description: 'The envelope over every train position; absent with output.detail "summary".' }),
       })
       .optional()
       .openapi({ description: 'Present when the combination moves a train: the envelope over its positions.' }),
@@ -127,7 +127,8 @@ export const loadCombinationsOutput = z
     combinations: z.array(combinationOutput).openapi({ description: 'Every combination checked, in order.' }),
     envelope: z
       .object({ strength: diagramEnvelopeOutput.optional(), serviceability: diagramEnvelopeOutput.optional() })
-      .openapi({ description: 'The envelope of every combination of each purpose, over every train position (exact).' }),
+      .optional()
+      .openapi({ description: 'The envelope of every combination of each purpose, over every train position (exact); absent with output.detail "summary".' }),
   })
   .optional()
   .openapi('LoadCombinationsResult', {

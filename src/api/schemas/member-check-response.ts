@@ -42,13 +42,13 @@ export const memberCheckResponse = z
         nodes: z.array(z.number()).openapi({ description: 'Node positions of the analysis (ends, supports, hinges, point loads, ends of distributed loads), in the length unit.' }),
       })
       .openapi({ description: 'The member as analysed.' }),
-    section: resolvedSectionOutput,
+    section: resolvedSectionOutput.optional().openapi({ description: 'The section as resolved, with its properties; absent with output.detail "summary".' }),
     material: materialOutput,
     selfWeight: z
       .object({ applied: z.boolean().openapi({ description: 'True when selfWeight was asked for.' }), intensity: z.number().openapi({ description: 'Self-weight per length (downward), in the forcePerLength unit; 0 when not applied.' }) })
       .openapi({ description: 'Whether the member\'s own weight was added.' }),
     reactions: z.array(reactionOutput).openapi({ description: 'One per support, in the order given.' }),
-    diagrams: diagramsOutput,
+    diagrams: diagramsOutput.optional().openapi({ description: 'The sampled diagrams; absent with output.detail "summary".' }),
     extremes: extremesOutput,
     equilibrium: equilibriumOutput,
     ...checksOutput,

@@ -33,6 +33,17 @@ export const outputOptions = z
       .optional()
       .openapi({ description: `Evenly spaced diagram points from 0 to the length, default ${DEFAULT_SAMPLES}, at most ${MAX_SAMPLES}; every node is added, twice where a diagram jumps.` }),
     units: outputUnits.optional(),
+    detail: z
+      .enum(['full', 'summary'])
+      .optional()
+      .openapi({ description: 'full (default): everything. summary: the verdict, governing check, checks, reactions and extremes, without the sampled diagrams, the echoed section table and the envelopes of load combinations: a small answer for a configurator or a large batch.' }),
+    significantDigits: z
+      .number()
+      .int()
+      .min(1)
+      .max(17)
+      .optional()
+      .openapi({ description: 'Round every presented quantity (lengths, forces, stresses, diagram values...) to this many significant digits; the calculation is not rounded. Utilizations, safety factors and other ratios are never rounded, so a verdict always reads as its number.' }),
   })
   .openapi('OutputOptions');
 

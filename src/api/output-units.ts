@@ -99,6 +99,19 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
   return { names, factors };
 }
 
+/** A length the engine wrote into a text ("2.5 m", "1e-7 m"), with the number it holds. */
+const METRE_TEXT = /(-?\d+(?:\.\d+)?(?:e[-+]?\d+)?) m\b/g;
+
+/**
+ * A text of the engine (a location, a reason) with every length in it, which the engine writes in
+ * metres ("span 0 m to 3.6 m"), in the presented length unit ("span 0 mm to 3600 mm"), six significant
+ * digits at most as the engine writes them. In SI the text is returned as it is.
+ */
+export function textInUnits(units: OutputUnits, text: string): string {
+  if (units.factors.length === 1) return text;
+  return text.replace(METRE_TEXT, (_match, metres: string) => `${Number((Number(metres) / units.factors.length).toPrecision(6))} ${units.names.length}`);
+}
+
 /** An SI value in the presented unit; -0 becomes 0. */
 export function present(units: OutputUnits, kind: QuantityKind, valueSI: number): number {
   const value = valueSI / units.factors[kind];

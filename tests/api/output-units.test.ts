@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { present, resolveOutputUnits, SI_OUTPUT, US_OUTPUT } from '../../src/api/output-units.js';
+import { present, resolveOutputUnits, SI_OUTPUT, textInUnits, US_OUTPUT } from '../../src/api/output-units.js';
 import { ProblemError } from '../../src/api/problems.js';
 
 describe('resolveOutputUnits', () => {
@@ -54,5 +54,19 @@ describe('section property units', () => {
     expect(units.names.secondMoment).toBe('cm^4');
     expect(present(units, 'area', 28.5e-4)).toBeCloseTo(2850, 9);
     expect(present(units, 'warpingConstant', 12.99e-9)).toBeCloseTo(12.99e9, 0);
+  });
+});
+
+describe('textInUnits', () => {
+  it('writes the lengths of an engine text in the presented length unit, and leaves SI texts as they are', () => {
+    const millimetres = resolveOutputUnits({ length: 'mm' }, ['output', 'units']);
+    expect(textInUnits(millimetres, 'span 0 m to 3.6 m, deflection along y')).toBe('span 0 mm to 3600 mm, deflection along y');
+    expect(textInUnits(millimetres, 'pin at support 1, plate 0.03 m thick')).toBe('pin at support 1, plate 30 mm thick');
+    // 2.7 m / 0.0254 m = 106.2992... in, six significant digits as the engine writes its own.
+    expect(textInUnits(US_OUTPUT, 'unbraced length 0 m to 2.7 m')).toBe('unbraced length 0 in to 106.299 in');
+    const text = 'overhang 0 m to 1.2 m';
+    expect(textInUnits(SI_OUTPUT, text)).toBe(text);
+    // Only numbers followed by the unit m are lengths: words and other units stay.
+    expect(textInUnits(millimetres, 'bottom fibre (tension side), 2 mm of web')).toBe('bottom fibre (tension side), 2 mm of web');
   });
 });

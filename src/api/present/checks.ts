@@ -5,7 +5,7 @@
  */
 
 import type { BucklingAxisResult, CheckQuantity, FailureCheck, GoverningFailure, MemberCheckOutcome, StressExtreme } from '../../engine/checks/check-outcome.js';
-import { present, type OutputUnits } from '../output-units.js';
+import { present, textInUnits, type OutputUnits } from '../output-units.js';
 
 /** The unit kind of each check quantity; it is also the quantity's name in the contract. */
 const CHECK_KINDS: Record<CheckQuantity, 'stress' | 'force' | 'moment' | 'deflection' | 'angle'> = {
@@ -39,7 +39,7 @@ function presentStress(extreme: StressExtreme, units: OutputUnits) {
   return {
     value: present(units, 'stress', extreme.value),
     position: optionalLength(units, extreme.position),
-    location: extreme.location ?? undefined,
+    location: extreme.location === null ? undefined : textInUnits(units, extreme.location),
   };
 }
 
@@ -63,7 +63,7 @@ export function presentCheckList(checks: readonly FailureCheck[], units: OutputU
       utilization: check.utilization,
       passes: check.passes,
       position: optionalLength(units, check.position),
-      location: check.location ?? undefined,
+      location: check.location === null ? undefined : textInUnits(units, check.location),
       basis: check.basis,
       combination: origin?.combination,
       loadPosition: optionalLength(units, origin?.loadPosition),
@@ -79,7 +79,7 @@ export function presentGoverning(governing: GoverningFailure | null, units: Outp
         utilization: governing.utilization,
         safetyFactor: governing.safetyFactor,
         position: optionalLength(units, governing.position),
-        location: governing.location ?? undefined,
+        location: governing.location === null ? undefined : textInUnits(units, governing.location),
       };
 }
 
@@ -88,7 +88,7 @@ export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits, o
   const { stresses, criteria } = outcome;
   return {
     checks: presentCheckList(outcome.checks, units, origins),
-    notApplicable: outcome.notApplicable.map(({ mode, reason }) => ({ mode, reason })),
+    notApplicable: outcome.notApplicable.map(({ mode, reason }) => ({ mode, reason: textInUnits(units, reason) })),
     governing: presentGoverning(outcome.governing, units),
     verdict: outcome.verdict,
     buckling: { governing: presentAxis(outcome.buckling.governing, units), axes: outcome.buckling.axes.map((axis) => presentAxis(axis, units)) },

@@ -23,7 +23,7 @@ export function presentReactions(analysis: MemberAnalysis, labels: readonly (str
  * array is packed: JSON.stringify writes a packed array of doubles about a quarter faster than a holey
  * one. In SI (factor 1) the column is sent as it is: x / 1 is x, and JSON writes -0 as 0.
  */
-function presentColumn(values: readonly number[], factor: number, digits: number | undefined): readonly number[] {
+export function presentColumn(values: readonly number[], factor: number, digits: number | undefined): readonly number[] {
   if (factor === 1 && digits === undefined) return values;
   const out: number[] = [];
   for (let i = 0; i < values.length; i++) {

@@ -5,9 +5,9 @@ import type { CombinationsOutcome, CombinedReactionBound } from '../../engine/co
 import { REACTION_COMPONENTS, type ReactionBound, type ReactionComponent } from '../../engine/combinations/train-envelope.js';
 import type { DiagramEnvelope } from '../../engine/combinations/diagram-envelope.js';
 import type { NormalisedCombinations } from '../normalise/load-combinations.js';
-import { present, rounded, type OutputUnits } from '../output-units.js';
+import { present, type OutputUnits } from '../output-units.js';
 import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
-import { presentExtremes, presentReactions } from './analysis.js';
+import { presentColumn, presentExtremes, presentReactions } from './analysis.js';
 import { presentCheckList, presentGoverning } from './checks.js';
 
 const REACTION_KIND: Record<ReactionComponent, 'force' | 'moment'> = { fx: 'force', fy: 'force', fz: 'force', mx: 'moment', my: 'moment', mz: 'moment' };
@@ -16,19 +16,16 @@ export const DEFAULT_SET_BASIS =
   'Default set, common practice in the allowable-stress format (a placeholder for the governing code; after ASCE/SEI 7, 2.4.1 and 2.5.2, from memory): strength G; G + Q for each variable action; G + 0.75 (the variable actions together, one wind direction and one moving load at a time); 0.6 G + W for each wind action (wind at its characteristic, service-level value); G + A + 0.5 (imposed and other) + 0.2 (snow) for each accidental action. Serviceability, unfactored: G when nothing varies; G + Q for each variable action; G + the variable actions together, chosen as for strength. Loads at characteristic values; the required safety factors apply to the resistance.';
 const GIVEN_SET_BASIS = 'The combinations given in the request, each action times its factor (superposition).';
 
-function presentColumn(values: readonly number[], factor: number, digits: number | undefined): number[] {
-  return values.map((value) => rounded(value / factor, digits));
-}
-
 export function presentEnvelope(envelope: DiagramEnvelope, units: OutputUnits) {
+  // presentColumn hands back the engine's own column in SI: the answer only reads it.
   const max = {} as Record<DiagramField, number[]>;
   const min = {} as Record<DiagramField, number[]>;
   for (const field of DIAGRAM_FIELDS) {
     const factor = units.factors[DIAGRAM_FIELD_INFO[field].kind];
-    max[field] = presentColumn(envelope.max[field], factor, units.significantDigits);
-    min[field] = presentColumn(envelope.min[field], factor, units.significantDigits);
+    max[field] = presentColumn(envelope.max[field], factor, units.significantDigits) as number[];
+    min[field] = presentColumn(envelope.min[field], factor, units.significantDigits) as number[];
   }
-  return { x: presentColumn(envelope.x, units.factors.length, units.significantDigits), max, min };
+  return { x: presentColumn(envelope.x, units.factors.length, units.significantDigits) as number[], max, min };
 }
 
 function presentBounds(bounds: Readonly<Record<ReactionComponent, ReactionBound>>, units: OutputUnits) {

@@ -12,6 +12,7 @@
  */
 
 import { analyseMember } from '../analysis/analyse-member.js';
+import { pieceIndexAt } from '../analysis/field-values.js';
 import { evaluatePolynomial } from '../analysis/polynomial.js';
 import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis, type MemberPiece } from '../analysis/result.js';
 import { POSITION_TOLERANCE } from '../analysis/tolerances.js';
@@ -98,18 +99,9 @@ export function structuralNodesOf(member: Pick<MemberModel, 'length' | 'supports
   return nodes;
 }
 
-/** Every field at one position on one side. */
+/** Every field at one position on one side, into `out` in DIAGRAM_FIELDS order. */
 function fieldsAt(analysis: MemberAnalysis, x: number, right: boolean, out: Float64Array): void {
-  const { pieces } = analysis;
-  let lo = 0;
-  let hi = pieces.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    const end = (pieces[mid] as MemberPiece).end;
-    if (right ? x >= end : x > end) lo = mid + 1;
-    else hi = mid;
-  }
-  const piece = pieces[lo] as MemberPiece;
+  const piece = analysis.pieces[pieceIndexAt(analysis, x, right ? 'right' : 'left')] as MemberPiece;
   for (let f = 0; f < DIAGRAM_FIELDS.length; f++) out[f] = evaluatePolynomial(piece.fields[DIAGRAM_FIELDS[f] as DiagramField], x - piece.start);
 }
 

@@ -2191,7 +2191,7 @@ export interface components {
             /** @description Round every presented quantity (lengths, forces, stresses, diagram values...) to this many significant digits; the calculation is not rounded. Utilizations, safety factors and other ratios are never rounded, so a verdict always reads as its number. */
             significantDigits?: number;
         };
-        /** @description SI (default); US (in, kip, kip*ft, ksi, kip/ft, in^4...); or a unit per kind of quantity (kinds not named stay SI, except that deflections follow the length unit, and area, section moduli, second moments and the warping constant follow a plain length unit as its powers). The response echoes the units used in `units`. */
+        /** @description SI (default); US (in, kip, kip*ft, ksi, kip/ft, in^4...); or a unit per kind of quantity. Kinds not named stay SI, except the derived ones, which follow the base units named: deflection the length unit; area, section moduli, second moments, the warping constant and torsional shear per torque its powers (mm^2 ... mm^6, mm^-3); force per length and translational stiffness force over length (kN/mm); moment per length moment over length; rotational stiffness moment per radian. Stress, density and mass per length follow nothing. The response echoes the units used in `units`. */
         OutputUnits: ("SI" | "US") | components["schemas"]["UnitMap"];
         /**
          * @description A unit per kind of quantity; kinds not named stay SI.

@@ -64,6 +64,30 @@ function build(names: Record<QuantityKind, string>): OutputUnits {
 export const SI_OUTPUT: OutputUnits = build(SI_UNITS);
 export const US_OUTPUT: OutputUnits = build(US_UNITS);
 
+/** `unit` as an operand: a plain name as it is, anything else in parentheses. */
+function operand(unit: string): string {
+  return /^[A-Za-z]+$/.test(unit) ? unit : `(${unit})`;
+}
+
+/**
+ * Kinds whose unit is made from the base units (length, force, moment) unless the request names it:
+ * with length mm and force kN, a force per length is in kN/mm and a second moment in mm^4. Stress,
+ * density and mass per length keep their own units (MPa is not kN/mm^2 to anyone reading them).
+ * Made from SI names, each gives its SI unit back ("N/m", "m^4"), so SI answers are unchanged.
+ */
+const DERIVED_UNITS: readonly { readonly kind: QuantityKind; readonly name: (names: Readonly<Record<QuantityKind, string>>) => string }[] = [
+  { kind: 'deflection', name: (n) => n.length },
+  { kind: 'area', name: (n) => `${operand(n.length)}^2` },
+  { kind: 'sectionModulus', name: (n) => `${operand(n.length)}^3` },
+  { kind: 'secondMoment', name: (n) => `${operand(n.length)}^4` },
+  { kind: 'warpingConstant', name: (n) => `${operand(n.length)}^6` },
+  { kind: 'torsionalShearPerTorque', name: (n) => `${operand(n.length)}^-3` },
+  { kind: 'forcePerLength', name: (n) => `${n.force}/${operand(n.length)}` },
+  { kind: 'translationalStiffness', name: (n) => `${n.force}/${operand(n.length)}` },
+  { kind: 'momentPerLength', name: (n) => `${n.moment}/${operand(n.length)}` },
+  { kind: 'rotationalStiffness', name: (n) => `${n.moment}/rad` },
+];
+
 /** Resolves output.units; `path` is where it sits in the request, for the error pointers. */
 export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (string | number)[]): OutputUnits {
   if (request === undefined || request === 'SI') return SI_OUTPUT;
@@ -81,20 +105,15 @@ export function resolveOutputUnits(request: OutputUnitsRequest, path: readonly (
     factors[kind] = factor;
   }
   if (errors.length > 0) throw new ProblemError('invalidInput', 'Some output units are not valid.', errors);
-  // Deflections are lengths, and section properties its powers: they follow the length unit unless
-  // given one of their own ("mm" gives mm^2, mm^3, mm^4, mm^6).
-  if (request.length !== undefined) {
-    const follow = (kind: QuantityKind, name: string, factor: number) => {
-      if (request[kind] !== undefined) return;
-      names[kind] = name;
-      factors[kind] = factor;
-    };
-    follow('deflection', names.length, factors.length);
-    if (/^[A-Za-z]+$/.test(names.length)) {
-      for (const [kind, power] of [['area', 2], ['sectionModulus', 3], ['secondMoment', 4], ['warpingConstant', 6]] as const) {
-        follow(kind, `${names.length}^${power}`, factors.length ** power);
-      }
-    }
+  for (const derived of DERIVED_UNITS) {
+    if (request[derived.kind] !== undefined) continue;
+    const name = derived.name(names);
+    // Taken from mathjs, not multiplied out, so the echoed name and the factor cannot disagree; a name
+    // made from unusual base units that mathjs cannot read back keeps the SI unit.
+    const factor = unitFactorToSI(name, derived.kind);
+    if (factor === undefined) continue;
+    names[derived.kind] = name;
+    factors[derived.kind] = factor;
   }
   return { names, factors };
 }

@@ -70,3 +70,47 @@ describe('textInUnits', () => {
     expect(textInUnits(millimetres, 'bottom fibre (tension side), 2 mm of web')).toBe('bottom fibre (tension side), 2 mm of web');
   });
 });
+
+describe('derived units', () => {
+  it('follow the base units named: mm and kN give kN/mm, mm^-3 and kN*m/mm, each factor read back by mathjs', () => {
+    const units = resolveOutputUnits({ length: 'mm', force: 'kN', moment: 'kN*m' }, []);
+    expect(units.names).toMatchObject({
+      forcePerLength: 'kN/mm', translationalStiffness: 'kN/mm', momentPerLength: 'kN*m/mm', rotationalStiffness: 'kN*m/rad',
+      torsionalShearPerTorque: 'mm^-3', area: 'mm^2', warpingConstant: 'mm^6', stress: 'Pa', density: 'kg/m^3', massPerLength: 'kg/m',
+    });
+    // 2,200 N/m is 0.0022 kN/mm; 20 kN/mm is 2e7 N/m; 1,000 m^-3 is 1e-6 mm^-3.
+    expect(present(units, 'forcePerLength', 2200)).toBeCloseTo(0.0022, 15);
+    expect(present(units, 'translationalStiffness', 2e7)).toBeCloseTo(20, 12);
+    expect(present(units, 'momentPerLength', 500)).toBeCloseTo(0.0005, 15);
+    expect(present(units, 'rotationalStiffness', 5e4)).toBeCloseTo(50, 12);
+    expect(present(units, 'torsionalShearPerTorque', 1000)).toBeCloseTo(1e-6, 18);
+  });
+
+  it('give the SI units back when only SI base units are in play', () => {
+    const units = resolveOutputUnits({ stress: 'MPa' }, []);
+    for (const kind of ['forcePerLength', 'translationalStiffness', 'momentPerLength', 'rotationalStiffness', 'torsionalShearPerTorque', 'area', 'secondMoment'] as const) {
+      expect(units.names[kind]).toBe(SI_OUTPUT.names[kind]);
+      expect(units.factors[kind]).toBe(1);
+    }
+  });
+
+  it('yield to a unit the request names, and to the US customary table', () => {
+    const units = resolveOutputUnits({ length: 'mm', force: 'kN', forcePerLength: 'kN/m' }, []);
+    expect(units.names.forcePerLength).toBe('kN/m');
+    expect(units.names.translationalStiffness).toBe('kN/mm');
+    expect(present(units, 'forcePerLength', 2200)).toBeCloseTo(2.2, 12);
+    expect(US_OUTPUT.names.forcePerLength).toBe('kip/ft');
+    // 1 kip/ft = 4448.2216152605 N / 0.3048 m.
+    expect(present(US_OUTPUT, 'forcePerLength', 4448.2216152605 / 0.3048)).toBeCloseTo(1, 12);
+  });
+
+  it('are made from whatever base units are named, and read back by mathjs', () => {
+    const units = resolveOutputUnits({ length: 'cm', force: 'lbf', moment: 'lbf*in' }, []);
+    expect(units.names.forcePerLength).toBe('lbf/cm');
+    expect(units.names.momentPerLength).toBe('lbf*in/cm');
+    const feetAndInches = resolveOutputUnits({ length: 'ft', force: 'kip' }, []);
+    expect(feetAndInches.names.translationalStiffness).toBe('kip/ft');
+    // 1 kip/ft in N/m.
+    expect(feetAndInches.factors.translationalStiffness).toBeCloseTo(4448.2216152605 / 0.3048, 9);
+  });
+});

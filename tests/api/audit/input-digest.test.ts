@@ -71,4 +71,4 @@ describe('audit', () => {
 });
 
 /** Written from this service on 2026-12-02 and checked equal over two separate runs. */
-const PINNED_EXAMPLE_DIGEST = 'bdd8631c5335785a672513298b5d3ee80481001205b8527b09a93afc4de55472';
+const PINNED_EXAMPLE_DIGEST = '796918783d808bf54a891157f0fc4d5fc99b46f8986867765ab4e233795340ac';

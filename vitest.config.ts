@@ -6,5 +6,6 @@ export default defineConfig({
     environment: 'node',
     pool: 'threads',
     testTimeout: 20000,
+    setupFiles: ['tests/support/contract-setup.ts'],
   },
 });

@@ -4,7 +4,7 @@
  */
 
 import { randomUUID } from 'node:crypto';
-import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import Fastify, { type FastifyInstance, type FastifyRequest, type FastifyServerOptions } from 'fastify';
 import { AnswerCache, DEFAULT_ANSWER_CACHE_BYTES } from './api/answer-cache.js';
 import { problemFromError, registerErrorHandler, sendProblem } from './api/error-handler.js';
 import { registerJsonBody } from './api/json-body.js';
@@ -52,6 +52,8 @@ export interface AppOptions {
   readonly requestTimeoutMs?: number;
   /** Longest a socket may stay idle, ms (Fastify's connectionTimeout). Default 120 s. */
   readonly connectionTimeoutMs?: number;
+  /** Shown every exchange as it is sent: the request, the status and the payload (the tests check each against the contract). */
+  readonly observeExchange?: (request: FastifyRequest, statusCode: number, payload: unknown) => void;
 }
 
 export const DEFAULT_REQUEST_TIMEOUT_MS = 60_000;
@@ -93,6 +95,13 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     reply.header('x-request-id', request.id);
     done();
   });
+  const observe = options.observeExchange;
+  if (observe !== undefined) {
+    app.addHook('onSend', async (request, reply, payload) => {
+      observe(request, reply.statusCode, payload);
+      return payload;
+    });
+  }
   // JSON only: without this Fastify would also take text/plain bodies.
   app.removeContentTypeParser('text/plain');
   const metrics = options.metrics ?? new ServiceMetrics({ processMetrics: options.processMetrics ?? false });

@@ -4,6 +4,7 @@ import type { FastifyInstance } from 'fastify';
 import { afterAll, beforeAll } from 'vitest';
 import { buildApp, type AppOptions } from '../../src/app.js';
 import { loadCatalogues, type LoadedCatalogues } from '../../src/api/load-catalogues.js';
+import { checkExchange } from './strict-contract.js';
 
 let catalogues: Promise<LoadedCatalogues> | undefined;
 
@@ -12,8 +13,17 @@ export function embeddedCatalogues(): Promise<LoadedCatalogues> {
   return catalogues;
 }
 
+/**
+ * An app as main.ts builds it, every exchange of which is checked against the committed contract
+ * (tests/support/strict-contract.ts); tests/support/contract-setup.ts fails a test file that saw a
+ * disagreement.
+ */
 export async function testApp(options: AppOptions = {}): Promise<FastifyInstance> {
-  return buildApp({ catalogues: await embeddedCatalogues(), ...options });
+  return buildApp({
+    catalogues: await embeddedCatalogues(),
+    observeExchange: (request, statusCode, payload) => checkExchange(request.method, request.routeOptions.url, statusCode, request.body, payload),
+    ...options,
+  });
 }
 
 /** An app listening on a free local port for the describe block it is called in: for clients that need a URL. */

@@ -4,32 +4,12 @@
  * are refused, as the service refuses them.
  */
 
-import { readFileSync } from 'node:fs';
-import { Ajv2020 } from 'ajv/dist/2020.js';
 import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { routeContracts } from '../../../src/app.js';
+import { checkExchange, contractDocument as document, contractViolations, validatorOf, type Schema } from '../../support/strict-contract.js';
 import { testApp } from '../../support/test-app.js';
-
-type Schema = Record<string, unknown>;
-const document = JSON.parse(readFileSync(new URL('../../../openapi/openapi.json', import.meta.url), 'utf8')) as {
-  components: { schemas: Record<string, Schema> };
-  paths: Record<string, Record<string, { requestBody?: { content: Record<string, { schema: Schema }> }; responses: Record<string, { content?: Record<string, { schema: Schema }> }> }>>;
-};
-
-/** Strict, with OpenAPI's own annotation keywords (example, discriminator), which JSON Schema 2020-12 does not define: a oneOf is then validated as JSON Schema says, exactly one branch. */
-const ajv = new Ajv2020({ strict: true, allErrors: true, allowUnionTypes: true });
-ajv.addKeyword({ keyword: 'example' });
-ajv.addKeyword({ keyword: 'discriminator' });
-/** The contract's component schemas as the $defs of one schema, its references pointed there. */
-const toDefinitions = (schema: unknown) => JSON.parse(JSON.stringify(schema).replace(/"#\/components\/schemas\//g, '"contract#/$defs/')) as Schema;
-ajv.addSchema({ $id: 'contract', $defs: toDefinitions(document.components.schemas) });
-
-/** A schema of the document, its references resolved against the contract's components. */
-function validatorOf(schema: Schema) {
-  return ajv.compile(toDefinitions(schema));
-}
 
 const posts = routeContracts().filter((contract) => contract.method === 'post' && contract.exampleBody !== undefined);
 const examples = posts.flatMap((contract) => [
@@ -70,5 +50,37 @@ describe('the contract under a strict JSON Schema 2020-12 validator', () => {
     const item = (posts.find((contract) => contract.path === '/v1/member-checks')?.exampleBody ?? {}) as object;
     expect(validate({ items: [{ id: 'line-1', ...item }, { id: 7, ...item }] }), JSON.stringify(validate.errors?.slice(0, 3))).toBe(true);
     expect(validate({ items: [{ id: 'line-1', ...item, colour: 'red' }] })).toBe(false);
+  });
+});
+
+describe('every exchange of the test apps is checked against the contract', () => {
+  const example = posts.find((contract) => contract.path === '/v1/member-checks')?.exampleBody as Record<string, unknown>;
+
+  it('records a body the service took that the contract refuses, and a refused body is no disagreement', () => {
+    const before = contractViolations.length;
+    checkExchange('POST', '/v1/member-checks', 400, { ...example, colour: 'red' }, undefined);
+    expect(contractViolations).toHaveLength(before);
+    checkExchange('POST', '/v1/member-checks', 200, { ...example, colour: 'red' }, undefined);
+    expect(contractViolations).toHaveLength(before + 1);
+    expect(contractViolations.at(-1)).toMatch(/^POST \/v1\/member-checks answered 200 to a body the contract refuses: .*colour/);
+    contractViolations.splice(before);
+  });
+
+  it('records an answer that is not what the contract describes for its status', () => {
+    const before = contractViolations.length;
+    checkExchange('POST', '/v1/member-checks', 200, example, JSON.stringify({ verdict: 'pass' }));
+    expect(contractViolations.at(-1)).toMatch(/^POST \/v1\/member-checks 200: the answer is not what the contract describes/);
+    contractViolations.splice(before);
+  });
+
+  it('holds a batch to the items the service took: a refused item is answered on its own', () => {
+    const before = contractViolations.length;
+    const body = { items: [example, { ...example, colour: 'red' }] };
+    checkExchange('POST', '/v1/member-checks/batch', 200, body, JSON.stringify({ results: [{ index: 0, status: 200 }, { index: 1, status: 400 }] }));
+    // The made-up answer above is not a whole batch answer; only the request side is looked at here.
+    expect(contractViolations.slice(before).filter((line) => line.includes('body the contract refuses'))).toEqual([]);
+    checkExchange('POST', '/v1/member-checks/batch', 200, body, JSON.stringify({ results: [{ index: 0, status: 200 }, { index: 1, status: 200 }] }));
+    expect(contractViolations.slice(before).filter((line) => line.includes('body the contract refuses'))).toHaveLength(1);
+    contractViolations.splice(before);
   });
 });

@@ -60,6 +60,28 @@ describe('units at the boundary', () => {
     expect(response.body.reactions[0].fy).toBeCloseTo(3600 / 4448.2216152605, 12);
   });
 
+  it('presents derived quantities in units made from the base units asked for: SI, mm/kN and US', async () => {
+    // The 40 x 80 mm steel bar weighs 0.04 x 0.08 m^2 x 7850 kg/m^3 x 9.80665 m/s^2 = 246.34 N/m; the
+    // torsional shear per torque is compared with the SI answer, only its unit changing (1 m^-3 = 1e-9 mm^-3).
+    const bar = { ...shelfBeam, material: { ...shelfBeam.material, density: 7850 }, selfWeight: true };
+    const weightSI = 0.04 * 0.08 * 7850 * 9.80665;
+    const si = (await post(bar)).body;
+    expect(si.units).toMatchObject({ forcePerLength: 'N/m', translationalStiffness: 'N/m', torsionalShearPerTorque: 'm^-3' });
+    expect(si.selfWeight.intensity).toBeCloseTo(weightSI, 9);
+    const metric = (await post({ ...bar, output: { units: { length: 'mm', force: 'kN', moment: 'kN*m', stress: 'MPa' } } })).body;
+    expect(metric.units).toMatchObject({ forcePerLength: 'kN/mm', translationalStiffness: 'kN/mm', momentPerLength: 'kN*m/mm', rotationalStiffness: 'kN*m/rad', torsionalShearPerTorque: 'mm^-3' });
+    expect(metric.selfWeight.intensity).toBeCloseTo(weightSI / 1e6, 15);
+    expect(metric.section.properties.torsionalShearPerTorque).toBeCloseTo(si.section.properties.torsionalShearPerTorque * 1e-9, 12);
+    const us = (await post({ ...bar, output: { units: 'US' } })).body;
+    expect(us.units).toMatchObject({ forcePerLength: 'kip/ft', torsionalShearPerTorque: 'in^-3' });
+    // 1 kip/ft = 4448.2216152605 N / 0.3048 m (NIST SP 811).
+    expect(us.selfWeight.intensity).toBeCloseTo(weightSI / (4448.2216152605 / 0.3048), 12);
+    expect(us.section.properties.torsionalShearPerTorque).toBeCloseTo(si.section.properties.torsionalShearPerTorque * 0.0254 ** 3, 9);
+    const named = (await post({ ...bar, output: { units: { length: 'mm', force: 'kN', forcePerLength: 'kN/m' } } })).body;
+    expect(named.units.forcePerLength).toBe('kN/m');
+    expect(named.selfWeight.intensity).toBeCloseTo(weightSI / 1000, 12);
+  });
+
   it('samples as asked, with every node, and doubles x at a jump', async () => {
     const response = await post({ ...shelfBeam, loads: [{ type: 'point', position: 1.0, fy: -1000 }], output: { samples: 5 } });
     const x: number[] = response.body.diagrams.x;

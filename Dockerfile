@@ -1,7 +1,9 @@
 # Memberproof service image. Multi-stage: build with the dev dependencies, run with production ones only.
 # Not built on the development machines (they have no Docker engine); kept conventional on purpose.
+# Node 22 LTS, pinned to a release (the same in both stages, and within package.json's engines); the
+# suite passes on it and on Node 20.19, which the development machines still carry (see README, Runtime).
 
-FROM node:20-bookworm-slim AS build
+FROM node:22.23.3-bookworm-slim AS build
 WORKDIR /app
 COPY package.json package-lock.json ./
 RUN npm ci
@@ -9,7 +11,7 @@ COPY tsconfig.json tsconfig.build.json ./
 COPY src ./src
 RUN npm run build
 
-FROM node:20-bookworm-slim AS runtime
+FROM node:22.23.3-bookworm-slim AS runtime
 ENV NODE_ENV=production \
     HOST=0.0.0.0 \
     PORT=3000 \

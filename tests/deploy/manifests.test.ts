@@ -243,11 +243,22 @@ describe('deploy/kubernetes', () => {
 
 describe('Dockerfile', () => {
   it('runs the production dependencies only, as the node user, health-checked on /healthz', () => {
-    expect(runtimeStage()[0]?.arguments).toMatch(/^node:20-bookworm-slim\b/);
+    expect(runtimeStage()[0]?.arguments).toMatch(/^node:22\.\d+\.\d+-bookworm-slim\b/);
     expect(argumentsOf('RUN').some((command) => /\bnpm ci --omit=dev\b/.test(command))).toBe(true);
     expect(argumentsOf('USER').at(-1)).toBe('node');
     expect(argumentsOf('HEALTHCHECK')).toHaveLength(1);
     expect(dockerfileHealthScript()).toContain('/healthz');
+  });
+
+  it('builds and runs on one pinned Node 22 LTS release that package.json\'s engines admit', () => {
+    const images = dockerfileStages(readText('Dockerfile')).map((stage) => stage[0]?.arguments.split(/\s+/)[0]);
+    expect(new Set(images).size).toBe(1);
+    const [, minor = '', patch = ''] = /^node:22\.(\d+)\.(\d+)-bookworm-slim$/.exec(images[0] ?? '') ?? [];
+    expect(patch).not.toBe('');
+    const engines = z.object({ engines: z.object({ node: z.string() }) }).parse(JSON.parse(readText('package.json'))).engines.node;
+    // "^20.19.0 || >=22.12.0": the image's 22.x must be at or past 22.12 (require of ES modules, which some dependencies need).
+    expect(engines).toBe('^20.19.0 || >=22.12.0');
+    expect(Number(minor)).toBeGreaterThanOrEqual(12);
   });
 
   it('exposes the container port of the Deployment', () => {

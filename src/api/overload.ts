@@ -52,7 +52,9 @@ export async function registerOverload(app: FastifyInstance, options: OverloadOp
     // plugin's code does so; its types only admit void).
     pressureHandler: ((request: FastifyRequest, reply: FastifyReply, type: string, value: number | undefined) => {
       if (NEVER_SHED.has(request.url.split('?')[0] as string)) return undefined;
-      const problem = new ProblemError('overloaded', `The service is overloaded (${MEASURES[type] ?? type} ${Math.round(Number(value))}); retry in ${settings.retryAfterSeconds} s.`, [], { retryAfter: settings.retryAfterSeconds });
+      // The monitor reports an infinite delay when the loop did not turn once in its last sample.
+      const measured = Number.isFinite(value) ? `${MEASURES[type] ?? type} ${Math.round(Number(value))}` : 'the event loop did not turn in the last sample';
+      const problem = new ProblemError('overloaded', `The service is overloaded (${measured}); retry in ${settings.retryAfterSeconds} s.`, [], { retryAfter: settings.retryAfterSeconds });
       if (request.observed) request.observed.problem = problem.problem;
       reply.code(503).header('retry-after', String(settings.retryAfterSeconds)).type(PROBLEM_CONTENT_TYPE);
       return problem.body(request.url);

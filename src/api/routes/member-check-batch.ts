@@ -10,7 +10,7 @@ import type { RouteContract } from '../route-contract.js';
 import { BATCH_EXAMPLE, batchEnvelope, batchItem, batchRequest, batchResponse, MAX_BATCH_ITEMS } from '../schemas/batch-exchange.js';
 import { DEFAULT_SAMPLES } from '../schemas/output-options.js';
 import { parseBody } from '../validation.js';
-import { timedCompute } from '../metrics.js';
+import { checkInSlices } from '../work-slices.js';
 
 export const DEFAULT_BATCH_BODY_LIMIT = 16 * 1024 * 1024;
 
@@ -84,7 +84,8 @@ export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number
       }
       const budget: WorkBudget = { remaining: MAX_BATCH_LOAD_STATES, limit: MAX_BATCH_LOAD_STATES };
       request.observed.batchItems = items.length;
-      const results = timedCompute(request, () => items.map((item, index) => checkItem(item, index, catalogues, request.url, budget)));
+      const { results, computeSeconds } = await checkInSlices(items, (item, index) => checkItem(item, index, catalogues, request.url, budget));
+      request.observed.engineSeconds = computeSeconds;
       request.observed.verdicts = results.flatMap((outcome) => ('verdict' in outcome ? [outcome.verdict] : []));
       let pass = 0;
       let fail = 0;

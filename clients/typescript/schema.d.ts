@@ -323,8 +323,18 @@ export interface components {
                  * @description The failure mode.
                  * @enum {string}
                  */
-                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing";
+                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
                 /** @description Why the mode does not apply to this member. */
+                reason: string;
+            }[];
+            /** @description Modes that apply to this member but that the service did not evaluate: while any is listed the verdict is not-verified (or fail), never pass. */
+            unchecked: {
+                /**
+                 * @description The failure mode.
+                 * @enum {string}
+                 */
+                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
+                /** @description Why the service could not evaluate it, and what would let it. */
                 reason: string;
             }[];
             /** @description The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand. */
@@ -333,7 +343,7 @@ export interface components {
                  * @description The failure mode.
                  * @enum {string}
                  */
-                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing";
+                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
                 /** @description Its utilization: demand x required factor / capacity. */
                 utilization: number;
                 /** @description Its safety factor: capacity / demand. */
@@ -343,11 +353,7 @@ export interface components {
                 /** @description Where on the section, or which part of the member. */
                 location?: string;
             };
-            /**
-             * @description pass when every check passes.
-             * @enum {string}
-             */
-            verdict: "pass" | "fail";
+            verdict: components["schemas"]["Verdict"];
             buckling: components["schemas"]["Buckling"];
             /** @description Absent when lateral-torsional buckling does not apply. */
             lateralTorsionalBuckling?: {
@@ -361,8 +367,21 @@ export interface components {
                 effectiveLength: number;
                 /** @description C1 (Cb), dimensionless. */
                 momentGradientFactor: number;
-                /** @description Elastic critical moment. In the response's moment unit (SI: N*m). */
+                /** @description Elastic critical moment M_cr, with the load height and C2 of the three-factor formula. In the response's moment unit (SI: N*m). */
                 criticalMoment: number;
+                /** @description lambda_LT = sqrt(W fy / M_cr), dimensionless. */
+                relativeSlenderness: number;
+                /** @description chi_LT of EN 1993-1-1 6.3.2.2, dimensionless. */
+                reductionFactor: number;
+                /** @description M_b = chi_LT W fy, the capacity of the check. In the response's moment unit (SI: N*m). */
+                resistance: number;
+                /**
+                 * @description The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d.
+                 * @enum {string}
+                 */
+                curve: "a" | "b" | "c" | "d";
+                /** @description The load's distance from the shear centre, taken on the destabilising side. In the response's length unit (SI: m). */
+                loadHeight: number;
             };
             stresses: components["schemas"]["Stresses"];
             criteria: components["schemas"]["CriteriaUsed"];
@@ -630,7 +649,7 @@ export interface components {
              * @description The failure mode.
              * @enum {string}
              */
-            mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing";
+            mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
             /**
              * @description What demand and capacity measure, so which unit of `units` they are in.
              * @enum {string}
@@ -659,6 +678,11 @@ export interface components {
             /** @description With a moving load: where the train's reference point stood when this check was at its worst. In the response's length unit (SI: m). */
             loadPosition?: number;
         };
+        /**
+         * @description pass: every check passes and every mode that can govern this member was checked. fail: a check fails. not-verified: nothing checked fails, but a mode that applies was not evaluated (listed in unchecked): the member is not shown to be adequate, and must be checked for that mode by other means.
+         * @enum {string}
+         */
+        Verdict: "pass" | "fail" | "not-verified";
         /** @description Column buckling about each principal axis; governing is the axis with the lowest critical load. */
         Buckling: {
             governing: components["schemas"]["BucklingAxis"];
@@ -957,18 +981,24 @@ export interface components {
             factors: {
                 [key: string]: number;
             };
-            /**
-             * @description pass when every check of this combination passes.
-             * @enum {string}
-             */
-            verdict: "pass" | "fail";
+            verdict: components["schemas"]["Verdict"];
+            /** @description Modes that apply to this member but that the service did not evaluate: while any is listed the verdict is not-verified (or fail), never pass. */
+            unchecked: {
+                /**
+                 * @description The failure mode.
+                 * @enum {string}
+                 */
+                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
+                /** @description Why the service could not evaluate it, and what would let it. */
+                reason: string;
+            }[];
             /** @description The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand. */
             governing?: {
                 /**
                  * @description The failure mode.
                  * @enum {string}
                  */
-                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing";
+                mode: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
                 /** @description Its utilization: demand x required factor / capacity. */
                 utilization: number;
                 /** @description Its safety factor: capacity / demand. */
@@ -1479,15 +1509,15 @@ export interface components {
              */
             position: number | string;
             /**
-             * @description fixed: all six directions restrained. pinned: ux, uy, uz and rx restrained, bending rotations free. roller: uy, uz and rx restrained, free along x and in bending rotation. (enum property replaced by openapi-typescript)
+             * @description fixed: all six directions restrained. pinned: ux, uy, uz and rx restrained, bending rotations free. roller: uy, uz and rx restrained, free along x and in bending rotation. bearing: a shaft bearing, ux, uy and uz restrained, free to turn (twist) and in bending rotation. torsion-restraint: only twist (rx) held, where a coupling, a drive or a brake holds a shaft against turning; the torque flows there. (enum property replaced by openapi-typescript)
              * @enum {string}
              */
-            type: "fixed" | "pinned" | "roller";
+            type: "fixed" | "pinned" | "roller" | "bearing" | "torsion-restraint";
             /** @description A name echoed with the reaction. */
             label?: string;
             pin?: components["schemas"]["Pin"];
         };
-        /** @description The pin of a support's connection, checked in shear and bearing under the support's resultant reaction. */
+        /** @description The pin of a support's connection, checked in shear, bearing and bending under the support's resultant reaction. */
         Pin: {
             /**
              * @description Pin diameter. A number in m, or a string with a unit, e.g. "250 mm".
@@ -1498,10 +1528,20 @@ export interface components {
             /** @description 1: single shear (F / A); 2: double shear, a clevis (F / 2A). */
             shearPlanes: 1 | 2;
             /**
-             * @description Thickness of the plate bearing on the pin (bearing stress F / (d t)). A number in m, or a string with a unit, e.g. "250 mm".
+             * @description Thickness of the plate bearing on the pin (bearing stress F / (d t)): in double shear the eye between the clevis plates. A number in m, or a string with a unit, e.g. "250 mm".
              * @example 250 mm
              */
             plateThickness: number | string;
+            /**
+             * @description Thickness of each clevis plate (double shear), or of the other plate (single shear), for pin bending. Default: half the plate thickness in double shear (two clevis plates together as thick as the eye, the thinnest that bear as much), the plate thickness in single shear. A number in m, or a string with a unit, e.g. "250 mm".
+             * @example 250 mm
+             */
+            clevisPlateThickness?: number | string;
+            /**
+             * @description Clear gap between the plate and each clevis plate, for pin bending. Default 0, the published no-gap case. A number in m, or a string with a unit, e.g. "250 mm".
+             * @example 250 mm
+             */
+            gap?: number | string;
         };
         /** @description The pin material, by grade or properties. */
         MaterialInput: components["schemas"]["MaterialGrade"] | components["schemas"]["MaterialProperties"];
@@ -2090,7 +2130,7 @@ export interface components {
         };
         /** @description What counts as passing. The defaults are common practice standing in for the governing code. */
         Criteria: {
-            /** @description Required safety factor: one number for every strength and stability check, or by mode. Defaults (common practice): 1.5 against yield, 2.0 against ultimate, 2.5 against buckling. */
+            /** @description Required safety factor: one number for every strength and stability check, or by mode. Defaults (common practice): 1.5 against yield, 2.0 against ultimate, 2.5 against buckling. One number is a floor: it raises the modes whose default is lower and never lowers a mode below its default (a notice names those kept); give factors by mode to set a mode lower. */
             requiredSafetyFactor?: number | components["schemas"]["SafetyFactorsByMode"];
             /** @description Span / allowed deflection for spans between supports (250 means L/250); default 250 (common practice). */
             deflectionLimitRatio?: number;
@@ -2136,6 +2176,18 @@ export interface components {
             "pin-shear"?: number;
             /** @description Required safety factor for the pin-bearing check. */
             "pin-bearing"?: number;
+            /** @description Required safety factor for the pin-bending check. */
+            "pin-bending"?: number;
+            /** @description Required safety factor for the flexural-torsional-buckling check. */
+            "flexural-torsional-buckling"?: number;
+            /** @description Required safety factor for the local-buckling check. */
+            "local-buckling"?: number;
+            /** @description Required safety factor for the web-shear-buckling check. */
+            "web-shear-buckling"?: number;
+            /** @description Required safety factor for the patch-loading check. */
+            "patch-loading"?: number;
+            /** @description Required safety factor for the fatigue check. */
+            fatigue?: number;
             /** @description Factor for the checks against an ultimate strength (tension-ultimate; every strength check of a brittle material). */
             ultimate?: number;
         };
@@ -2167,7 +2219,7 @@ export interface components {
              */
             eccentricity?: number | string;
         };
-        /** @description Lateral-torsional buckling of I-sections, channels and narrow rectangles bent about z. */
+        /** @description Lateral-torsional buckling of open sections bent about z (I-sections, channels, tees, custom sections, narrow rectangles). */
         LateralTorsionalOptions: {
             /**
              * @description Length between points braced against lateral movement and twist; default: cut at every support that holds the member laterally. A number in m, or a string with a unit, e.g. "250 mm".
@@ -2178,6 +2230,14 @@ export interface components {
             braced?: boolean;
             /** @description Moment-gradient factor C1 (Cb); default from the moment diagram (AISC 360-16, eq. F1-1). */
             momentGradientFactor?: number;
+            /** @description Where the transverse loads act on the section: shear-centre, top-flange (default: the safe side for gravity loads), bottom-flange, or a distance from the shear centre. Taken on the destabilising side whichever way the load acts. */
+            loadHeight?: ("shear-centre" | "top-flange" | "bottom-flange") | {
+                /**
+                 * @description The load's distance from the shear centre. A number in m, or a string with a unit, e.g. "250 mm".
+                 * @example 250 mm
+                 */
+                aboveShearCentre: number | string;
+            };
         };
         OutputOptions: {
             /** @description Evenly spaced diagram points from 0 to the length, default 101, at most 10001; every node is added, twice where a diagram jumps. */
@@ -2262,6 +2322,8 @@ export interface components {
             pass: number;
             /** @description Items checked with verdict fail. */
             fail: number;
+            /** @description Items checked with verdict not-verified: nothing failed, but a mode that applies was not evaluated. */
+            notVerified: number;
             /** @description Items answered with a problem. */
             error: number;
             /** @description The highest governing utilization among the checked items. */
@@ -2336,14 +2398,14 @@ export interface components {
              * @description The governing failure mode; absent when nothing has any demand or the candidate could not be checked.
              * @enum {string}
              */
-            governingMode?: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing";
+            governingMode?: "tension" | "tension-ultimate" | "compression" | "bending" | "shear" | "torsion" | "buckling" | "lateral-torsional-buckling" | "combined" | "beam-column" | "eccentric-column" | "deflection" | "twist" | "pin-shear" | "pin-bearing" | "pin-bending" | "flexural-torsional-buckling" | "local-buckling" | "web-shear-buckling" | "patch-loading" | "fatigue";
             /** @description The governing utilization; absent when the candidate could not be checked. */
             utilization?: number;
             /**
-             * @description 'error': the candidate could not be checked (see problem).
+             * @description The candidate's verdict (a candidate is selected only with pass); 'error': the candidate could not be checked (see problem).
              * @enum {string}
              */
-            verdict: "pass" | "fail" | "error";
+            verdict: "pass" | "fail" | "not-verified" | "error";
             /** @description Why a candidate could not be checked. */
             problem?: string;
         };

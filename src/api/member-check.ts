@@ -49,7 +49,10 @@ export interface NormalisedCheck {
   readonly loads: readonly LoadModel[];
   readonly loadLabels: readonly (string | undefined)[];
   readonly supportLabels: readonly (string | undefined)[];
+  /** Whether the member's own weight is added: as the request says, else by default (not for custom sections). */
   readonly selfWeight: boolean;
+  /** True when the request said selfWeight itself; false when the default decided. */
+  readonly selfWeightGiven: boolean;
   readonly samples: number;
   readonly units: OutputUnits;
   /** output.detail: summary leaves out the diagrams, the section table and the envelopes. */
@@ -64,8 +67,24 @@ export interface NormalisedCheck {
   readonly base: Path;
 }
 
+/**
+ * The member's own weight is added unless the request says otherwise, for catalogue and shape sections:
+ * leaving it out is the unsafe side. A custom section may describe only part of a member, so there it
+ * is added only when asked for. Either way a notice says which.
+ */
+export function selfWeightOf(request: Pick<MemberCheckRequest, 'selfWeight'>, customSection: boolean): boolean {
+  return request.selfWeight ?? !customSection;
+}
+
 /** Everything but the section, converted and validated; throws one problem listing every bad field. */
-export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, catalogues: Catalogues, base: Path, reader = new QuantityReader()): NormalisedCheck {
+export function normaliseCheck(
+  request: Omit<MemberCheckRequest, 'section'>,
+  catalogues: Catalogues,
+  base: Path,
+  reader = new QuantityReader(),
+  customSection = false,
+): NormalisedCheck {
+  const selfWeight = selfWeightOf(request, customSection);
   const member = normaliseMember(request.member, reader, [...base, 'member']);
   const loads = normaliseLoads(request.loads ?? [], reader, [...base, 'loads']);
   const combinationsRead = asksForCombinations(request) ? readCombinations(request, reader, base) : null;
@@ -77,13 +96,14 @@ export function normaliseCheck(request: Omit<MemberCheckRequest, 'section'>, cat
   const units = withSignificantDigits(resolveOutputUnits(request.output?.units, [...base, 'output', 'units']), request.output?.significantDigits);
   reader.finish();
   const samples = request.output?.samples ?? DEFAULT_SAMPLES;
-  const combinations = combinationsRead === null ? null : resolveCombinations(request, combinationsRead, member, samples, base);
+  const combinations = combinationsRead === null ? null : resolveCombinations({ ...request, selfWeight }, combinationsRead, member, samples, base);
   return {
     member,
     loads,
     loadLabels: (request.loads ?? []).map((load) => load.label),
     supportLabels: request.member.supports.map((support) => support.label),
-    selfWeight: request.selfWeight ?? false,
+    selfWeight,
+    selfWeightGiven: request.selfWeight !== undefined,
     samples,
     units,
     detail: request.output?.detail ?? 'full',
@@ -132,6 +152,8 @@ export function checkWithSection(check: NormalisedCheck, section: ResolvedSectio
   const model = memberModel(check, section.properties, material);
   const checks = {
     section: section.properties,
+    dimensions: section.dimensions,
+    fabrication: section.entry === undefined ? ('welded' as const) : ('rolled' as const),
     material,
     criteria: check.criteria,
     buckling: check.buckling,
@@ -200,9 +222,20 @@ export function presentCheck(check: NormalisedCheck, checked: CheckedMember): Me
       checked.combinations === null || check.combinations === null
         ? undefined
         : presentLoadCombinations(check.combinations, checked.combinations, check.supportLabels, units, check.detail),
-    notices: [...outcome.notices],
+    notices: withSelfWeightNotice(outcome.notices, check, present(units, 'forcePerLength', selfWeightIntensity), units.names.forcePerLength),
     audit: memberCheckAudit(check, section, material),
   };
+}
+
+/** The notices with one saying whether the member's own weight was added and why, after the caution. */
+function withSelfWeightNotice(notices: readonly string[], check: NormalisedCheck, intensity: number, unit: string): string[] {
+  const said = check.selfWeight
+    ? `Self-weight added: ${Number(intensity.toPrecision(4))} ${unit} downward (density x area x g)${check.selfWeightGiven ? '' : ', by default for a catalogue or shape section; selfWeight: false leaves it out'}.`
+    : check.selfWeightGiven
+      ? "Self-weight not added (selfWeight: false): the member's own weight is not in these results."
+      : "Self-weight not added: a custom section's default (it may describe only part of a member); give selfWeight: true to add density x area x g.";
+  const [caution, ...rest] = notices;
+  return caution === undefined ? [said] : [caution, said, ...rest];
 }
 
 /**
@@ -232,7 +265,7 @@ function spend(budget: WorkBudget, check: NormalisedCheck): void {
 export function checkRequest(request: MemberCheckRequest, catalogues: Catalogues, base: Path = [], budget?: WorkBudget): { check: NormalisedCheck; checked: CheckedMember } {
   const reader = new QuantityReader();
   const section = resolveSection(request.section, catalogues.sections, reader, [...base, 'section']);
-  const check = normaliseCheck(request, catalogues, base, reader);
+  const check = normaliseCheck(request, catalogues, base, reader, 'shape' in request.section && request.section.shape === 'custom');
   if (budget !== undefined) spend(budget, check);
   return { check, checked: checkWithSection(check, section()) };
 }

@@ -138,9 +138,11 @@ export function runMemberSizing(request: MemberSizingRequest, catalogues: Loaded
   const best = ranked[0] as CandidateResult;
   if (!best.passes || !best.checked) {
     const closest = rows[0] as CandidateRow;
+    const gaps = best.checked?.outcome.unchecked.map((gap) => gap.mode) ?? [];
+    const unverified = best.checked?.outcome.verdict === 'not-verified' ? ` It is not verified: ${[...new Set(gaps)].join(', ')} could not be checked (see unchecked in a member check).` : '';
     throw new ProblemError(
       'noPassingCandidate',
-      `None of the ${results.length} candidates passes; the closest is ${closest.designation}, governed by ${closest.governingMode ?? 'no mode'} at a utilization of ${closest.utilization?.toFixed(3)}.`,
+      `None of the ${results.length} candidates passes; the closest is ${closest.designation}, governed by ${closest.governingMode ?? 'no mode'} at a utilization of ${closest.utilization?.toFixed(3)}.${unverified}`,
       [],
       { closest, candidates: rows, excluded },
     );
@@ -167,7 +169,7 @@ function candidateRow(result: CandidateResult, rank: number, check: NormalisedCh
     ...(result.depth === undefined ? {} : { depth: present(check.units, 'length', result.depth) }),
     ...(governing ? { governingMode: governing.mode } : {}),
     ...(checked ? { utilization: result.utilization } : {}),
-    verdict: checked ? (result.passes ? 'pass' : 'fail') : 'error',
+    verdict: checked ? checked.outcome.verdict : 'error',
     ...(result.problem ? { problem: `${PROBLEMS[result.problem.problem].title}: ${result.problem.detail}` } : {}),
   };
 }

@@ -5,6 +5,7 @@
  * writing `request.observed`; one onResponse hook records it, so a route never touches a metric.
  */
 
+import type { Verdict } from '../engine/checks/check-outcome.js';
 import type { FastifyInstance, FastifyRequest } from 'fastify';
 import { collectDefaultMetrics, Counter, Histogram, Registry } from 'prom-client';
 
@@ -14,7 +15,7 @@ export interface Observed {
   /** Seconds spent computing the answer (normalise, engine, present, serialise). */
   engineSeconds?: number;
   /** Verdicts of the members checked. */
-  verdicts?: readonly ('pass' | 'fail')[];
+  verdicts?: readonly Verdict[];
   /** Items in a batch. */
   batchItems?: number;
   /** The answer came from the answer cache. */

@@ -11,7 +11,7 @@ export const FIGURE_FIELDS = DIAGRAM_FIELDS;
 
 export type FigureField = DiagramField;
 
-export type SupportKind = 'fixed' | 'pinned' | 'roller' | 'general';
+export type SupportKind = 'fixed' | 'pinned' | 'roller' | 'bearing' | 'torsion-restraint' | 'general';
 
 export interface FigureExtremes {
   readonly max: { readonly value: number; readonly position: number };

@@ -267,7 +267,10 @@ function drawSupports(out: string[], input: FigureInput, toX: (x: number) => num
   }
 }
 
-/** fixed: a hatched wall; pinned: a triangle; roller: a triangle on two wheels; general: a square. */
+/**
+ * fixed: a hatched wall; pinned: a triangle; roller: a triangle on two wheels; bearing: a block with a
+ * circle (a shaft turning in it); torsion-restraint: a crossed box (a coupling); general: a square.
+ */
 function supportSymbol(out: string[], kind: SupportKind, x: number, beamY: number, wallOnLeft: boolean): void {
   switch (kind) {
     case 'fixed': {
@@ -288,6 +291,16 @@ function supportSymbol(out: string[], kind: SupportKind, x: number, beamY: numbe
       out.push(element('circle', { cx: x - 4.5, cy: beamY + 13.5, r: 2.5 }));
       out.push(element('circle', { cx: x + 4.5, cy: beamY + 13.5, r: 2.5 }));
       ground(out, x, beamY + 16);
+      return;
+    case 'bearing':
+      out.push(element('rect', { x: x - 7, y: beamY + 1.5, width: 14, height: 11 }));
+      out.push(element('circle', { cx: x, cy: beamY + 7, r: 3 }));
+      ground(out, x, beamY + 12.5);
+      return;
+    case 'torsion-restraint':
+      out.push(element('rect', { x: x - 5, y: beamY - 8, width: 10, height: 16 }));
+      out.push(element('line', { x1: x - 5, y1: beamY - 8, x2: x + 5, y2: beamY + 8 }));
+      out.push(element('line', { x1: x + 5, y1: beamY - 8, x2: x - 5, y2: beamY + 8 }));
       return;
     case 'general':
       out.push(element('rect', { x: x - 5, y: beamY + 1.5, width: 10, height: 10 }));

@@ -47,6 +47,7 @@ p { margin: 1mm 0; }
 .job { color: #333; }
 .verdict { border: 0.8mm solid #111; padding: 2mm 3mm; margin: 4mm 0; }
 .verdict.fail { border-style: double; border-width: 1.6mm; }
+.verdict.not-verified { border-style: dashed; border-width: 1.2mm; }
 .verdict .word { font-size: 18pt; font-weight: bold; letter-spacing: 0.1em; margin: 0; }
 .caution { border: 0.3mm dashed #111; padding: 2mm 3mm; }
 table { border-collapse: collapse; width: 100%; margin: 1mm 0; }
@@ -140,10 +141,12 @@ function checksSection(answer: MemberCheckResponse): string {
     );
   });
   const notApplicable = answer.notApplicable.map((item) => `<li>${text(item.mode)}: ${text(item.reason)}</li>`).join('');
+  const unchecked = answer.unchecked.map((item) => `<li><strong>${text(item.mode)}</strong>: ${text(item.reason)}</li>`).join('');
   return [
     '<h2>Checks</h2>',
     `<table class="checks">${head('mode', 'demand', 'capacity', 'required factor', 'utilization', 'result', 'where', 'formula and source')}${rows.join('')}</table>`,
-    notApplicable ? `<p>Not checked:</p><ul>${notApplicable}</ul>` : '',
+    unchecked ? `<p><strong>Applies but not evaluated (the member is not verified for these):</strong></p><ul class="unchecked">${unchecked}</ul>` : '',
+    notApplicable ? `<p>Not applicable:</p><ul>${notApplicable}</ul>` : '',
   ].join('');
 }
 
@@ -167,6 +170,9 @@ function combinationsSection(answer: MemberCheckResponse): string {
   ].join('');
 }
 
+/** The verdict as a word that reads the same in black and white. */
+const VERDICT_WORDS: Record<MemberCheckResponse['verdict'], string> = { pass: 'PASS', fail: 'FAIL', 'not-verified': 'NOT VERIFIED' };
+
 /** The figure inlined: its XML declaration dropped, the rest as it is (the renderer escaped its texts). */
 function inlineSvg(svg: string): string {
   return svg.replace(/^<\?xml[^>]*\?>\s*/, '');
@@ -175,7 +181,7 @@ function inlineSvg(svg: string): string {
 export function memberReportHtml(input: ReportInput): string {
   const { meta, answer } = input;
   const governing = answer.governing;
-  const verdictWord = answer.verdict === 'pass' ? 'PASS' : 'FAIL';
+  const verdictWord = VERDICT_WORDS[answer.verdict];
   const governingText =
     governing === undefined
       ? 'No check has any demand.'

@@ -47,6 +47,7 @@ describe('company catalogues', () => {
         section: { designation: 'BR-UPRIGHT 90' },
         material: { grade: 'BR-S420MC' },
         loads: [{ type: 'point', position: '0.6 m', fy: '-2 kN' }],
+        selfWeight: false,
       });
     expect(check.status).toBe(200);
     expect(check.body.reactions[0].fy).toBeCloseTo(1000, 9);

@@ -38,7 +38,9 @@ interface ReferenceCase {
   tolerance: number;
   request: Record<string, unknown>;
   expected: {
-    verdict?: 'pass' | 'fail';
+    verdict?: 'pass' | 'fail' | 'not-verified';
+    /** The modes that apply but are not evaluated, in order. */
+    unchecked?: FailureMode[];
     /** null: no check has any demand, the response has no governing failure. */
     governing?: { mode: FailureMode; utilization?: number } | null;
     checks?: Partial<Record<FailureMode, ExpectedCheck>>;
@@ -67,7 +69,8 @@ interface CheckResponse {
   checks: ResponseCheck[];
   notApplicable: { mode: FailureMode; reason: string }[];
   governing?: { mode: FailureMode; utilization: number };
-  verdict: 'pass' | 'fail';
+  verdict: 'pass' | 'fail' | 'not-verified';
+  unchecked: { mode: FailureMode; reason: string }[];
   buckling: { governing: ResponseBucklingAxis; axes: ResponseBucklingAxis[] };
   lateralTorsionalBuckling?: Record<LateralTorsionalNumber, number>;
   stresses: Record<string, { value: number }>;
@@ -147,6 +150,7 @@ describe('member-check reference cases', () => {
       const length = body.member.length;
 
       if (expected.verdict !== undefined) expect(body.verdict, 'verdict').toBe(expected.verdict);
+      expect(body.unchecked.map((gap) => gap.mode), 'unchecked').toEqual(expected.unchecked ?? []);
       if (expected.governing === null) expect(body.governing, 'governing').toBeUndefined();
       else if (expected.governing !== undefined) {
         expect(body.governing?.mode, 'governing mode').toBe(expected.governing.mode);

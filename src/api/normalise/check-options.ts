@@ -29,10 +29,13 @@ export function normaliseBuckling(buckling: BucklingRequest | undefined, reader:
 
 export function normaliseLateralTorsional(options: LateralTorsionalRequest | undefined, reader: QuantityReader, base: Path): LateralTorsionalInput {
   if (options === undefined) return {};
-  const { unbracedLength, ...rest } = options;
+  const { unbracedLength, loadHeight, ...rest } = options;
   return {
     ...rest,
     ...(unbracedLength === undefined ? {} : { unbracedLength: reader.positive(unbracedLength, 'length', [...base, 'unbracedLength']) }),
+    ...(loadHeight === undefined
+      ? {}
+      : { loadHeight: typeof loadHeight === 'string' ? loadHeight : { aboveShearCentre: reader.read(loadHeight.aboveShearCentre, 'length', [...base, 'loadHeight', 'aboveShearCentre']) } }),
   };
 }
 
@@ -45,11 +48,17 @@ export function normalisePins(supports: readonly SupportInput[], materials: Mate
     const path = [...base, index, 'pin'];
     const diameter = reader.positive(pin.diameter, 'length', [...path, 'diameter']);
     const plateThickness = reader.positive(pin.plateThickness, 'length', [...path, 'plateThickness']);
+    const clevisPlateThickness =
+      pin.clevisPlateThickness === undefined
+        ? plateThickness / pin.shearPlanes
+        : reader.positive(pin.clevisPlateThickness, 'length', [...path, 'clevisPlateThickness']);
+    const gap = pin.gap === undefined ? 0 : reader.read(pin.gap, 'length', [...path, 'gap']);
+    if (Number.isFinite(gap) && gap < 0) reader.fail([...path, 'gap'], 'a gap cannot be negative');
     const material = resolveMaterial(pin.material, materials, reader, [...path, 'material']);
     // A bad diameter is already reported; the material waits for a usable one.
     if (!(diameter > 0)) return;
     // A pin's thickness band is its diameter (a round bar).
-    pins.push({ support: index, diameter, plateThickness, shearPlanes: pin.shearPlanes, material: material.forThickness(diameter).material });
+    pins.push({ support: index, diameter, plateThickness, clevisPlateThickness, gap, shearPlanes: pin.shearPlanes, material: material.forThickness(diameter).material });
   });
   return pins;
 }

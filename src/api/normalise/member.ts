@@ -5,10 +5,13 @@ import type { LoadInput, MemberInput, SupportInput } from '../schemas/member-inp
 import type { QuantityInput } from '../schemas/quantity.js';
 import type { Path, QuantityReader } from './quantity-reader.js';
 
-const PRESET_RESTRAINED: Record<'fixed' | 'pinned' | 'roller', readonly Direction[]> = {
+const PRESET_RESTRAINED: Record<'fixed' | 'pinned' | 'roller' | 'bearing' | 'torsion-restraint', readonly Direction[]> = {
   fixed: DIRECTIONS,
   pinned: ['ux', 'uy', 'uz', 'rx'],
   roller: ['uy', 'uz', 'rx'],
+  // A shaft's bearing holds it in place but lets it turn; a coupling or a drive holds it against twist.
+  bearing: ['ux', 'uy', 'uz'],
+  'torsion-restraint': ['rx'],
 };
 
 export interface NormalisedMember {

@@ -89,6 +89,7 @@ export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits, o
   return {
     checks: presentCheckList(outcome.checks, units, origins),
     notApplicable: outcome.notApplicable.map(({ mode, reason }) => ({ mode, reason: textInUnits(units, reason) })),
+    unchecked: outcome.unchecked.map(({ mode, reason }) => ({ mode, reason: textInUnits(units, reason) })),
     governing: presentGoverning(outcome.governing, units),
     verdict: outcome.verdict,
     buckling: { governing: presentAxis(outcome.buckling.governing, units), axes: outcome.buckling.axes.map((axis) => presentAxis(axis, units)) },
@@ -102,6 +103,11 @@ export function presentChecks(outcome: MemberCheckOutcome, units: OutputUnits, o
             effectiveLength: present(units, 'length', ltb.effectiveLength),
             momentGradientFactor: ltb.momentGradientFactor,
             criticalMoment: present(units, 'moment', ltb.criticalMoment),
+            relativeSlenderness: ltb.relativeSlenderness,
+            reductionFactor: ltb.reductionFactor,
+            resistance: present(units, 'moment', ltb.resistance),
+            curve: ltb.curve,
+            loadHeight: present(units, 'length', ltb.loadHeight),
           },
     stresses: {
       axialTension: presentStress(stresses.axialTension, units),

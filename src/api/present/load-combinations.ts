@@ -5,7 +5,7 @@ import type { CombinationsOutcome, CombinedReactionBound } from '../../engine/co
 import { REACTION_COMPONENTS, type ReactionBound, type ReactionComponent } from '../../engine/combinations/train-envelope.js';
 import type { DiagramEnvelope } from '../../engine/combinations/diagram-envelope.js';
 import type { NormalisedCombinations } from '../normalise/load-combinations.js';
-import { present, type OutputUnits } from '../output-units.js';
+import { present, textInUnits, type OutputUnits } from '../output-units.js';
 import { DIAGRAM_FIELD_INFO } from '../schemas/analysis-output.js';
 import { presentColumn, presentExtremes, presentReactions } from './analysis.js';
 import { presentCheckList, presentGoverning } from './checks.js';
@@ -73,6 +73,7 @@ export function presentLoadCombinations(normalised: NormalisedCombinations, outc
         description: combination.description,
         factors: Object.fromEntries(combination.factors),
         verdict: state.outcome.verdict,
+        unchecked: state.outcome.unchecked.map(({ mode, reason }) => ({ mode, reason: textInUnits(units, reason) })),
         governing: presentGoverning(state.outcome.governing, units),
         movingLoad:
           movingLoad === null

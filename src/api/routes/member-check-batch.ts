@@ -2,6 +2,7 @@
 
 import type { FastifyInstance } from 'fastify';
 import { SCREENING_CAUTION } from '../../engine/caution.js';
+import type { Verdict } from '../../engine/checks/check-outcome.js';
 import { problemFromError } from '../error-handler.js';
 import { finiteJson, sendJsonText } from '../answer-json.js';
 import { runMemberCheck, type Catalogues, type WorkBudget } from '../member-check.js';
@@ -33,7 +34,7 @@ export const memberCheckBatchContract: RouteContract = {
 
 /** One item's outcome; a result is kept as its JSON text, serialised (and guarded) once. */
 type BatchOutcome =
-  | { index: number; id?: string | number; status: 200; resultJson: string; verdict: 'pass' | 'fail'; utilization: number }
+  | { index: number; id?: string | number; status: 200; resultJson: string; verdict: Verdict; utilization: number }
   | { index: number; id?: string | number; status: number; error: ReturnType<ProblemError['body']> };
 
 /** Diagram points over all items bound the size of the answer (each point carries 12 numbers). */
@@ -89,18 +90,21 @@ export function memberCheckBatchRoutes(catalogues: Catalogues, bodyLimit: number
       request.observed.verdicts = results.flatMap((outcome) => ('verdict' in outcome ? [outcome.verdict] : []));
       let pass = 0;
       let fail = 0;
+      let notVerified = 0;
       let worst: { utilization: number; index: number } | undefined;
       for (const outcome of results) {
         if (!('resultJson' in outcome)) continue;
         if (outcome.verdict === 'pass') pass++;
-        else fail++;
+        else if (outcome.verdict === 'fail') fail++;
+        else notVerified++;
         if (worst === undefined || outcome.utilization > worst.utilization) worst = { utilization: outcome.utilization, index: outcome.index };
       }
       const summary = {
         total: results.length,
         pass,
         fail,
-        error: results.length - pass - fail,
+        notVerified,
+        error: results.length - pass - fail - notVerified,
         ...(worst === undefined ? {} : { worstUtilization: worst.utilization, worstIndex: worst.index }),
       };
       const resultsJson = results.map(outcomeJson).join(',');

@@ -56,6 +56,7 @@ export const batchResponse = z
         total: z.number().int().openapi({ description: 'Items in the batch.' }),
         pass: z.number().int().openapi({ description: 'Items checked with verdict pass.' }),
         fail: z.number().int().openapi({ description: 'Items checked with verdict fail.' }),
+        notVerified: z.number().int().openapi({ description: 'Items checked with verdict not-verified: nothing failed, but a mode that applies was not evaluated.' }),
         error: z.number().int().openapi({ description: 'Items answered with a problem.' }),
         worstUtilization: z.number().optional().openapi({ description: 'The highest governing utilization among the checked items.' }),
         worstIndex: z.number().int().optional().openapi({ description: 'The item that has it.' }),

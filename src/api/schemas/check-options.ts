@@ -23,7 +23,7 @@ export const criteriaInput = z
     requiredSafetyFactor: z
       .union([factor('One factor for every strength and stability check.'), safetyFactorByMode])
       .optional()
-      .openapi({ description: 'Required safety factor: one number for every strength and stability check, or by mode. Defaults (common practice): 1.5 against yield, 2.0 against ultimate, 2.5 against buckling.' }),
+      .openapi({ description: 'Required safety factor: one number for every strength and stability check, or by mode. Defaults (common practice): 1.5 against yield, 2.0 against ultimate, 2.5 against buckling. One number is a floor: it raises the modes whose default is lower and never lowers a mode below its default (a notice names those kept); give factors by mode to set a mode lower.' }),
     deflectionLimitRatio: factor('Span / allowed deflection for spans between supports (250 means L/250); default 250 (common practice).').optional(),
     cantileverDeflectionLimitRatio: factor('Length / allowed deflection for cantilevers and overhangs; default 180 (common practice).').optional(),
     allowedTwist: quantity('angle', 'Largest allowed angle of twist; default 1 degree (common practice).').optional(),
@@ -52,17 +52,26 @@ export const lateralTorsionalInput = z
     unbracedLength: quantity('length', 'Length between points braced against lateral movement and twist; default: cut at every support that holds the member laterally.').optional(),
     braced: z.boolean().optional().openapi({ description: 'The compression flange is braced continuously: no lateral-torsional buckling.' }),
     momentGradientFactor: factor('Moment-gradient factor C1 (Cb); default from the moment diagram (AISC 360-16, eq. F1-1).').optional(),
+    loadHeight: z
+      .union([
+        z.enum(['shear-centre', 'top-flange', 'bottom-flange']),
+        z.strictObject({ aboveShearCentre: quantity('length', "The load's distance from the shear centre.") }),
+      ])
+      .optional()
+      .openapi({ description: 'Where the transverse loads act on the section: shear-centre, top-flange (default: the safe side for gravity loads), bottom-flange, or a distance from the shear centre. Taken on the destabilising side whichever way the load acts.' }),
   })
-  .openapi('LateralTorsionalOptions', { description: 'Lateral-torsional buckling of I-sections, channels and narrow rectangles bent about z.' });
+  .openapi('LateralTorsionalOptions', { description: 'Lateral-torsional buckling of open sections bent about z (I-sections, channels, tees, custom sections, narrow rectangles).' });
 
 export const pinInput = z
   .strictObject({
     diameter: quantity('length', 'Pin diameter.'),
     material: materialInput.openapi({ description: 'The pin material, by grade or properties.' }),
     shearPlanes: z.union([z.literal(1), z.literal(2)]).openapi({ description: '1: single shear (F / A); 2: double shear, a clevis (F / 2A).' }),
-    plateThickness: quantity('length', 'Thickness of the plate bearing on the pin (bearing stress F / (d t)).'),
+    plateThickness: quantity('length', 'Thickness of the plate bearing on the pin (bearing stress F / (d t)): in double shear the eye between the clevis plates.'),
+    clevisPlateThickness: quantity('length', 'Thickness of each clevis plate (double shear), or of the other plate (single shear), for pin bending. Default: half the plate thickness in double shear (two clevis plates together as thick as the eye, the thinnest that bear as much), the plate thickness in single shear.').optional(),
+    gap: quantity('length', 'Clear gap between the plate and each clevis plate, for pin bending. Default 0, the published no-gap case.').optional(),
   })
-  .openapi('Pin', { description: "The pin of a support's connection, checked in shear and bearing under the support's resultant reaction." });
+  .openapi('Pin', { description: "The pin of a support's connection, checked in shear, bearing and bending under the support's resultant reaction." });
 
 export type CriteriaRequest = z.infer<typeof criteriaInput>;
 export type BucklingRequest = z.infer<typeof bucklingInput>;

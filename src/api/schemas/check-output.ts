@@ -55,11 +55,22 @@ export const governingOutput = z
   .optional()
   .openapi({ description: 'The check with the highest utilization (on a tie, the simpler mode); absent when nothing has any demand.' });
 
+/** The verdict rule, one place for every answer that carries a verdict. */
+export const VERDICT_RULE =
+  "pass: every check passes and every mode that can govern this member was checked. fail: a check fails. not-verified: nothing checked fails, but a mode that applies was not evaluated (listed in unchecked): the member is not shown to be adequate, and must be checked for that mode by other means.";
+
+export const verdictOutput = z.enum(['pass', 'fail', 'not-verified']).openapi('Verdict', { description: VERDICT_RULE });
+
+export const uncheckedOutput = z
+  .array(z.object({ mode, reason: z.string().openapi({ description: 'Why the service could not evaluate it, and what would let it.' }) }))
+  .openapi({ description: 'Modes that apply to this member but that the service did not evaluate: while any is listed the verdict is not-verified (or fail), never pass.' });
+
 export const checksOutput = {
   checks: z.array(failureCheckOutput).openapi({ description: 'Every applicable failure check.' }),
   notApplicable: z.array(z.object({ mode, reason: z.string().openapi({ description: 'Why the mode does not apply to this member.' }) })).openapi({ description: 'Modes not checked for this member, and why.' }),
+  unchecked: uncheckedOutput,
   governing: governingOutput,
-  verdict: z.enum(['pass', 'fail']).openapi({ description: 'pass when every check passes.' }),
+  verdict: verdictOutput,
   buckling: z
     .object({ governing: bucklingAxis, axes: z.array(bucklingAxis).openapi({ description: 'Every principal axis checked.' }) })
     .openapi('Buckling', { description: 'Column buckling about each principal axis; governing is the axis with the lowest critical load.' }),
@@ -70,7 +81,12 @@ export const checksOutput = {
       unbracedLength: presentedQuantity('length', 'Unbraced length.'),
       effectiveLength: presentedQuantity('length', 'Effective length used in the formula.'),
       momentGradientFactor: z.number().openapi({ description: 'C1 (Cb), dimensionless.' }),
-      criticalMoment: presentedQuantity('moment', 'Elastic critical moment.'),
+      criticalMoment: presentedQuantity('moment', 'Elastic critical moment M_cr, with the load height and C2 of the three-factor formula.'),
+      relativeSlenderness: z.number().openapi({ description: 'lambda_LT = sqrt(W fy / M_cr), dimensionless.' }),
+      reductionFactor: z.number().openapi({ description: 'chi_LT of EN 1993-1-1 6.3.2.2, dimensionless.' }),
+      resistance: presentedQuantity('moment', 'M_b = chi_LT W fy, the capacity of the check.'),
+      curve: z.enum(['a', 'b', 'c', 'd']).openapi({ description: 'The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d.' }),
+      loadHeight: presentedQuantity('length', "The load's distance from the shear centre, taken on the destabilising side."),
     })
     .optional()
     .openapi({ description: 'Absent when lateral-torsional buckling does not apply.' }),

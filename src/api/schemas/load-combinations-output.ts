@@ -3,7 +3,7 @@
 import { ACTION_CATEGORIES } from '../../engine/combinations/load-actions.js';
 import { REACTION_COMPONENTS } from '../../engine/combinations/train-envelope.js';
 import { DIAGRAM_FIELD_INFO, extremesOutput, reactionOutput } from './analysis-output.js';
-import { failureCheckOutput, governingOutput } from './check-output.js';
+import { failureCheckOutput, governingOutput, uncheckedOutput, verdictOutput } from './check-output.js';
 import { presentedQuantity } from './quantity.js';
 import { z } from './zod.js';
 
@@ -85,7 +85,8 @@ const combinationOutput = z
     purpose: z.enum(['strength', 'serviceability']).openapi({ description: 'strength: strength and stability checks; serviceability: deflection and twist.' }),
     description: z.string().openapi({ description: 'The factors in words, e.g. "1 permanent + 1 goods".' }),
     factors: z.record(z.string(), z.number()).openapi({ description: 'Factor by action id, as used.' }),
-    verdict: z.enum(['pass', 'fail']).openapi({ description: 'pass when every check of this combination passes.' }),
+    verdict: verdictOutput,
+    unchecked: uncheckedOutput,
     governing: governingOutput,
     movingLoad: z
       .object({

@@ -28,8 +28,9 @@ const springs = z
 const presetSupport = z
   .strictObject({
     position,
-    type: z.enum(['fixed', 'pinned', 'roller']).openapi({
-      description: 'fixed: all six directions restrained. pinned: ux, uy, uz and rx restrained, bending rotations free. roller: uy, uz and rx restrained, free along x and in bending rotation.',
+    type: z.enum(['fixed', 'pinned', 'roller', 'bearing', 'torsion-restraint']).openapi({
+      description:
+        'fixed: all six directions restrained. pinned: ux, uy, uz and rx restrained, bending rotations free. roller: uy, uz and rx restrained, free along x and in bending rotation. bearing: a shaft bearing, ux, uy and uz restrained, free to turn (twist) and in bending rotation. torsion-restraint: only twist (rx) held, where a coupling, a drive or a brake holds a shaft against turning; the torque flows there.',
     }),
     label: z.string().max(64).optional().openapi({ description: 'A name echoed with the reaction.' }),
     pin: pinInput.optional(),

@@ -71,7 +71,7 @@ export const candidateRow = z
     depth: presentedQuantity('length', 'Overall depth along y, when known.').optional(),
     governingMode: z.enum(FAILURE_MODES).optional().openapi({ description: 'The governing failure mode; absent when nothing has any demand or the candidate could not be checked.' }),
     utilization: z.number().optional().openapi({ description: 'The governing utilization; absent when the candidate could not be checked.' }),
-    verdict: z.enum(['pass', 'fail', 'error']).openapi({ description: "'error': the candidate could not be checked (see problem)." }),
+    verdict: z.enum(['pass', 'fail', 'not-verified', 'error']).openapi({ description: "The candidate's verdict (a candidate is selected only with pass); 'error': the candidate could not be checked (see problem)." }),
     problem: z.string().optional().openapi({ description: 'Why a candidate could not be checked.' }),
   })
   .openapi('SizingCandidateRow');

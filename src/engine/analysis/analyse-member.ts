@@ -31,7 +31,10 @@ function mechanismError(mechanism: Mechanism): EngineError {
   return new EngineError(
     'unstable-member',
     `The member is a mechanism: it can move in ${mechanism.direction} at x = ${mechanism.position} m without ` +
-      'deforming. Add or stiffen a support in that direction, or remove a hinge.',
+      'deforming. Add or stiffen a support in that direction, or remove a hinge.' +
+      (mechanism.direction === 'rx'
+        ? ' Nothing holds it against twist: for a shaft on bearings, add a support of type torsion-restraint where a coupling, drive or brake holds it.'
+        : ''),
     ['member', 'supports'],
     { ...mechanism },
   );

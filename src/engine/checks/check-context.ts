@@ -5,7 +5,7 @@
 
 import type { MemberCheckInput } from './check-input.js';
 import { columnAxesOf, type ColumnAxis } from './column-buckling.js';
-import type { FailureCheck, NotApplicableCheck, StressSummary } from './check-outcome.js';
+import type { FailureCheck, NotApplicableCheck, StressSummary, UncheckedMode } from './check-outcome.js';
 import { resolveCriteria, type ResolvedCriteria } from './criteria.js';
 import { scanMember, type MemberScan } from './critical-positions.js';
 import { materialStrengths, type MaterialStrengths } from './strengths.js';
@@ -21,10 +21,11 @@ export interface CheckContext {
   readonly columnAxes: readonly ColumnAxis[];
 }
 
-/** The checks a module made and the modes it found not to apply. */
+/** The checks a module made, the modes it found not to apply, and those that apply but it could not evaluate. */
 export interface CheckFindings {
   readonly checks: readonly FailureCheck[];
   readonly notApplicable: readonly NotApplicableCheck[];
+  readonly unchecked?: readonly UncheckedMode[];
 }
 
 /** Resolves the criteria, finds the critical positions and the stress peaks, and the column axes. */

@@ -6,8 +6,10 @@
 import type { MemberAnalysis } from '../analysis/result.js';
 import type { Material } from '../materials/material.js';
 import type { MemberModel } from '../member/model.js';
+import type { SectionDimensions } from '../sections/dimensions.js';
 import type { SectionProperties } from '../sections/section-properties.js';
 import type { CriteriaInput } from './criteria.js';
+import type { LoadHeight } from './lateral-torsional-buckling.js';
 
 /** The classic idealised ends of a column, each with its tabulated effective-length factor. */
 export type EndConditions = 'fixed-fixed' | 'fixed-pinned' | 'pinned-pinned' | 'fixed-free';
@@ -44,6 +46,8 @@ export interface LateralTorsionalInput {
   readonly braced?: boolean;
   /** C1 (Cb). Default: AISC 360-16 eq. F1-1 (from memory) from the moment diagram of each unbraced length, 1.0 with unbracedLength. */
   readonly momentGradientFactor?: number;
+  /** Where the transverse loads act on the section; default the top flange (lateral-torsional-buckling.ts). */
+  readonly loadHeight?: LoadHeight;
 }
 
 /** The pin through a support's connection, checked in shear and bearing. */
@@ -57,12 +61,20 @@ export interface PinInput {
   readonly shearPlanes: 1 | 2;
   /** Thickness of the plate that bears on the pin and carries the whole reaction, m. */
   readonly plateThickness: number;
+  /** Thickness of each clevis plate (double shear) or of the other plate (single shear), m. */
+  readonly clevisPlateThickness: number;
+  /** Clear gap between the plates, m. */
+  readonly gap: number;
 }
 
 export interface MemberCheckInput {
   readonly analysis: MemberAnalysis;
   readonly model: MemberModel;
   readonly section: SectionProperties;
+  /** The section's geometry, when known: the plate checks (webs, outstands) read it. */
+  readonly dimensions?: SectionDimensions;
+  /** Hot-rolled (catalogue) or welded (built from plates): it selects the imperfection curves. Default welded (the lower curves). */
+  readonly fabrication?: 'rolled' | 'welded';
   readonly material: Material;
   readonly criteria?: CriteriaInput;
   readonly buckling?: BucklingInput;

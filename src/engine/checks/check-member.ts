@@ -14,7 +14,7 @@ import { beamColumnChecks } from './beam-column.js';
 import { bendingChecks } from './bending.js';
 import { buildCheckContext, type CheckFindings } from './check-context.js';
 import type { MemberCheckInput } from './check-input.js';
-import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck } from './check-outcome.js';
+import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck, UncheckedMode } from './check-outcome.js';
 import { columnBuckling } from './column-buckling.js';
 import { combinedChecks } from './combined.js';
 import { deflectionChecks } from './deflection.js';
@@ -25,6 +25,11 @@ import { pinChecks } from './pins.js';
 import { shearChecks } from './shear.js';
 import { torsionChecks } from './torsion.js';
 import { twistChecks } from './twist.js';
+import { unevaluatedModes } from './unevaluated-modes.js';
+import { openSectionStabilityChecks } from './flexural-torsional-check.js';
+import { warpingStressChecks } from './warping-stresses.js';
+import { webStabilityChecks } from './web-stability.js';
+import { verdictOf } from './verdict.js';
 
 /** The section properties every stress formula divides by must be positive. */
 const DIVISOR_PROPERTIES = [
@@ -65,22 +70,25 @@ export function checkMember(input: MemberCheckInput): MemberCheckOutcome {
     deflectionChecks(context),
     twistChecks(context),
     pinChecks(context),
+    webStabilityChecks(context),
+    warpingStressChecks(context),
+    openSectionStabilityChecks(context),
+    unevaluatedModes(context),
   ];
   const checks: FailureCheck[] = [];
   const notApplicable: NotApplicableCheck[] = [];
-  let passes = true;
+  const unchecked: UncheckedMode[] = [];
   for (const finding of findings) {
-    for (const check of finding.checks) {
-      checks.push(check);
-      passes &&= check.passes;
-    }
+    for (const check of finding.checks) checks.push(check);
     for (const reason of finding.notApplicable) notApplicable.push(reason);
+    for (const gap of finding.unchecked ?? []) unchecked.push(gap);
   }
   return {
     checks,
     notApplicable,
+    unchecked,
     governing: governingFailure(checks),
-    verdict: passes ? 'pass' : 'fail',
+    verdict: verdictOf(checks, unchecked),
     buckling: buckling.summary,
     lateralTorsionalBuckling: lateralTorsional.summary,
     stresses: context.peaks,

@@ -33,6 +33,18 @@ export interface NotApplicableCheck {
   readonly reason: string;
 }
 
+/** A mode that can govern this member but that the service did not evaluate, and why. */
+export interface UncheckedMode {
+  readonly mode: FailureMode;
+  readonly reason: string;
+}
+
+/**
+ * 'pass' only when every check passes and every mode that can govern was checked; 'fail' when any
+ * check fails; otherwise 'not-verified': nothing checked fails, but a mode in `unchecked` might.
+ */
+export type Verdict = 'pass' | 'fail' | 'not-verified';
+
 /** 'minor' is the minor principal axis of a section whose principal axes are not y and z (angles). */
 export type BucklingAxis = 'y' | 'z' | 'minor';
 
@@ -73,6 +85,16 @@ export interface LateralTorsionalSummary {
   readonly momentGradientFactor: number;
   /** Elastic critical moment, N*m. */
   readonly criticalMoment: number;
+  /** lambda_LT = sqrt(W fy / M_cr). */
+  readonly relativeSlenderness: number;
+  /** chi_LT (EN 1993-1-1 6.3.2.2). */
+  readonly reductionFactor: number;
+  /** M_b = chi_LT W fy, N*m: the capacity of the check. */
+  readonly resistance: number;
+  /** The imperfection curve, EN 1993-1-1 Table 6.4. */
+  readonly curve: 'a' | 'b' | 'c' | 'd';
+  /** |zg|, m: the load's distance from the shear centre, taken on the destabilising side. */
+  readonly loadHeight: number;
 }
 
 /** A stress extreme: its value (>= 0, Pa), where along the member and where on the section. */
@@ -109,10 +131,11 @@ export interface GoverningFailure {
 export interface MemberCheckOutcome {
   readonly checks: readonly FailureCheck[];
   readonly notApplicable: readonly NotApplicableCheck[];
+  /** Modes that apply but were not evaluated: the verdict cannot be 'pass' while any is listed. */
+  readonly unchecked: readonly UncheckedMode[];
   /** The check with the highest utilization; null when no check has any demand. */
   readonly governing: GoverningFailure | null;
-  /** 'pass' when every check passes. */
-  readonly verdict: 'pass' | 'fail';
+  readonly verdict: Verdict;
   readonly buckling: BucklingSummary;
   /** null when lateral-torsional buckling does not apply. */
   readonly lateralTorsionalBuckling: LateralTorsionalSummary | null;

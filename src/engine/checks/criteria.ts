@@ -13,7 +13,8 @@ export type SafetyFactorKey = FailureMode | 'ultimate';
 export interface CriteriaInput {
   /**
    * One number for every strength and stability check (deflection and twist keep their own factor), or
-   * factors by mode. 'ultimate' applies to the checks made against an ultimate strength: tension-ultimate
+   * factors by mode. A single number never lowers a mode below its default (buckling keeps 2.5 when 1.5
+   * is given); factors by mode set each mode as given. 'ultimate' applies to the checks made against an ultimate strength: tension-ultimate
    * and, for a brittle material, every strength check whose mode is not given explicitly.
    */
   readonly requiredSafetyFactor?: number | Partial<Record<SafetyFactorKey, number>>;
@@ -37,9 +38,15 @@ export interface ResolvedCriteria {
   readonly shearYieldRatio: number;
   /** The criteria taken from the defaults rather than from the request. */
   readonly defaulted: readonly (keyof CriteriaInput)[];
+  /** Modes whose default stayed because a single requiredSafetyFactor was lower than it. */
+  readonly keptDefaults?: readonly SafetyFactorKey[];
 }
 
-/** Common practice: 1.5 against yield, 2.0 against ultimate, 2.5 against instability, 1.0 for serviceability. */
+/**
+ * Common practice: 1.5 against yield and against design-curve resistances that allow for imperfections
+ * (lateral-torsional buckling, web buckling), 2.0 against ultimate, 2.5 against elastic or idealised
+ * instability loads (Euler and Johnson columns), 1.0 for serviceability.
+ */
 const DEFAULT_REQUIRED_SAFETY_FACTOR: Readonly<Record<SafetyFactorKey, number>> = {
   tension: 1.5,
   'tension-ultimate': 2.0,
@@ -48,7 +55,8 @@ const DEFAULT_REQUIRED_SAFETY_FACTOR: Readonly<Record<SafetyFactorKey, number>> 
   shear: 1.5,
   torsion: 1.5,
   buckling: 2.5,
-  'lateral-torsional-buckling': 2.5,
+  // Against M_b = chi_LT W fy, a design curve that already allows for imperfections: the yield factor.
+  'lateral-torsional-buckling': 1.5,
   combined: 1.5,
   'beam-column': 1.5,
   'eccentric-column': 2.5,
@@ -56,6 +64,13 @@ const DEFAULT_REQUIRED_SAFETY_FACTOR: Readonly<Record<SafetyFactorKey, number>> 
   twist: 1.0,
   'pin-shear': 1.5,
   'pin-bearing': 1.5,
+  'pin-bending': 1.5,
+  'flexural-torsional-buckling': 2.5,
+  'local-buckling': 2.5,
+  // Design curves that already allow for imperfections (EN 1993-1-5): the factor against yield.
+  'web-shear-buckling': 1.5,
+  'patch-loading': 1.5,
+  fatigue: 1.0,
   ultimate: 2.0,
 };
 
@@ -142,11 +157,17 @@ function criteriaFilledIn(partial: CriteriaInput, material: Pick<Material, 'beha
   const given = partial.requiredSafetyFactor;
   if (given === undefined) defaulted.push('requiredSafetyFactor');
   const required = {} as Record<SafetyFactorKey, number>;
+  const keptDefaults: SafetyFactorKey[] = [];
   if (typeof given === 'number') {
+    // One number is a floor for every strength and stability mode, never a cut below a mode's default:
+    // 1.5 given for yield must not take buckling from 2.5 to 1.5 unnoticed.
     for (const key of SAFETY_FACTOR_KEYS) {
-      required[key] = SERVICEABILITY_MODES.includes(key as FailureMode)
-        ? DEFAULT_REQUIRED_SAFETY_FACTOR[key]
-        : given;
+      const fallback = DEFAULT_REQUIRED_SAFETY_FACTOR[key];
+      if (SERVICEABILITY_MODES.includes(key as FailureMode)) required[key] = fallback;
+      else {
+        required[key] = Math.max(given, fallback);
+        if (given < fallback) keptDefaults.push(key);
+      }
     }
   } else {
     const byMode = given ?? {};
@@ -168,5 +189,6 @@ function criteriaFilledIn(partial: CriteriaInput, material: Pick<Material, 'beha
     allowedTwist,
     shearYieldRatio: partial.shearYieldRatio ?? material.shearYieldRatio,
     defaulted,
+    ...(keptDefaults.length > 0 ? { keptDefaults } : {}),
   };
 }

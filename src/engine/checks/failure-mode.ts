@@ -19,6 +19,12 @@ export const FAILURE_MODES = [
   'twist',
   'pin-shear',
   'pin-bearing',
+  'pin-bending',
+  'flexural-torsional-buckling',
+  'local-buckling',
+  'web-shear-buckling',
+  'patch-loading',
+  'fatigue',
 ] as const;
 
 export type FailureMode = (typeof FAILURE_MODES)[number];

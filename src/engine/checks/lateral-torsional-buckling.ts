@@ -1,10 +1,18 @@
 /**
- * Lateral-torsional buckling of open sections bent about their strong axis (momentZ), elastic:
- *   M_cr = C1 (pi / L) sqrt(E Iy G J) sqrt(1 + pi^2 E Iw / (G J L^2))
- * with Iy the minor-axis second moment (secondMomentY for an upright section) and Iw the warping
- * constant (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., ch. 6, I-beam in pure bending
- * between fork supports, from memory). The capacity is this elastic M_cr: inelastic lateral-torsional
- * buckling (M_cr near the yield moment) is not covered, and yielding is the bending check's concern.
+ * Lateral-torsional buckling of open sections bent about their strong axis (momentZ).
+ *
+ * Elastic critical moment: the three-factor formula with load height and monosymmetry,
+ *   M_cr = C1 pi^2 E Iy / L^2 { sqrt[Iw / Iy + L^2 G J / (pi^2 E Iy) + (C2 zg - C3 zj)^2] - (C2 zg - C3 zj) }
+ * (ENV 1993-1-1:1992 Annex F / NCCI SN003, from memory; lateral-torsional-critical-moment.ts), which is
+ * the classic C1 (pi / L) sqrt(E Iy G J) sqrt(1 + pi^2 E Iw / (G J L^2)) of Timoshenko & Gere (2nd ed.,
+ * ch. 6) for a load through the shear centre of a doubly symmetric section. The load height zg is taken
+ * on the destabilising side whichever way the load acts (the safe side); by default the load acts on
+ * the top flange (lateralTorsional.loadHeight).
+ *
+ * Resistance: the inelastic reduction of EN 1993-1-1:2005 6.3.2.2 (general case, from memory),
+ *   M_b = chi_LT W fy, chi_LT from lambda_LT = sqrt(W fy / M_cr) and the curve of Table 6.4,
+ * with the elastic modulus W (no plastic reserve is counted on). No partial factor is applied: the
+ * required safety factor of the mode is.
  */
 
 import { EngineError } from '../engine-error.js';
@@ -17,6 +25,10 @@ import { failureCheck } from './failure-check.js';
 import { rangeLabel } from './labels.js';
 import { segmentsBetweenSupports } from './member-segments.js';
 import { momentGradientFactorOn } from './moment-gradient-factor.js';
+import { fieldAt } from '../analysis/field-values.js';
+import { evaluatePolynomial } from '../analysis/polynomial.js';
+import { criticalMomentFactors, generalCriticalMoment, teeMonosymmetryParameter, teeShearCentreHeight } from './lateral-torsional-critical-moment.js';
+import { lateralTorsionalResistance, ltbCurve, type LateralTorsionalCurve } from './lateral-torsional-reduction.js';
 import { fourSignificantText } from './number-texts.js';
 
 /** Common practice: a solid rectangle at least twice as deep as wide counts as a narrow, deep beam. */
@@ -47,17 +59,68 @@ export function elasticCriticalMoment(input: CriticalMomentInput): number {
   );
 }
 
-/** Why the check does not apply to this section, or null when it does. */
+/**
+ * Why the check does not apply to this section, or null when it does. Custom sections are checked with
+ * the doubly symmetric formula from the It, Iw and Iy given (Iw = 0 when not given, which lowers M_cr).
+ */
 export function lateralTorsionalExclusion(section: SectionProperties): string | null {
   if (section.closed) return 'closed section: it does not buckle laterally-torsionally in practice';
   if (section.secondMomentZ <= section.secondMomentY) return 'bending about z is not the strong axis of this section';
-  if (section.shape === 'i-section' || section.shape === 'channel') return null;
-  if (section.shape === 'rectangle') {
-    return section.depth >= NARROW_RECTANGLE_DEPTH_RATIO * section.width
-      ? null
-      : `a rectangle less than ${NARROW_RECTANGLE_DEPTH_RATIO} times as deep as wide does not buckle laterally before it yields (common practice)`;
+  if (section.shape === 'rectangle' && section.depth < NARROW_RECTANGLE_DEPTH_RATIO * section.width) {
+    return `a rectangle less than ${NARROW_RECTANGLE_DEPTH_RATIO} times as deep as wide does not buckle laterally before it yields (common practice)`;
   }
-  return `not covered for ${section.shape} sections (monosymmetric, unsymmetric or of unknown shape)`;
+  return null;
+}
+
+/** Shapes whose elastic critical moment this check cannot give: monosymmetric and unsymmetric open sections. */
+const UNEVALUATED_SHAPES = new Set(['angle']);
+
+/** Where the transverse load acts, relative to the shear centre. */
+export type LoadHeight = 'shear-centre' | 'top-flange' | 'bottom-flange' | { readonly aboveShearCentre: number };
+
+/** Default: the top flange, the destabilising side for gravity loads (the safe side). */
+export const DEFAULT_LOAD_HEIGHT: LoadHeight = 'top-flange';
+
+/** |zg|, m: the distance from the shear centre to where the load acts. */
+export function loadHeightDistance(section: SectionProperties, dimensions: CheckContext['input']['dimensions'], height: LoadHeight): number {
+  if (height === 'shear-centre') return 0;
+  if (typeof height === 'object') return Math.abs(height.aboveShearCentre);
+  if (section.shape === 'tee' && dimensions?.shape === 'tee') {
+    const shearCentre = teeShearCentreHeight(dimensions);
+    return height === 'top-flange' ? dimensions.depth - shearCentre : shearCentre;
+  }
+  // Doubly symmetric: the shear centre at mid-depth.
+  return section.depth / 2;
+}
+
+/** The imperfection curve of EN 1993-1-1:2005 Table 6.4 (from memory). */
+function curveOf(context: CheckContext): LateralTorsionalCurve {
+  const { section, fabrication } = context.input;
+  if (section.shape === 'i-section') return ltbCurve({ fabrication: fabrication ?? 'welded', depth: section.depth, width: section.width });
+  return ltbCurve({ fabrication: 'other', depth: section.depth, width: section.width });
+}
+
+/**
+ * What loads the span across the member, read from its shear diagram: a jump inside the span is a point
+ * load (C2 = 0.630), a sloping shear a distributed load (C2 = 0.454), neither only end moments (C2 = 0)
+ * (NCCI SN003 Table 3.2, from memory). A point load wins: its C2 is the larger, the safe side.
+ */
+function transverseLoading(context: CheckContext, from: number, to: number): 'central-point-load' | 'uniform-load' | null {
+  const { pieces } = context.input.analysis;
+  const scale = Math.max(largestMagnitudeOn(context.input.analysis, 'shearY', from, to).value, Number.MIN_VALUE);
+  let distributed = false;
+  for (let i = 0; i < pieces.length; i++) {
+    const piece = pieces[i] as (typeof pieces)[number];
+    if (piece.end <= from || piece.start >= to) continue;
+    const shear = piece.fields.shearY;
+    if (shear.slice(1).some((coefficient) => Math.abs(coefficient) * (piece.end - piece.start) > 1e-9 * scale)) distributed = true;
+    const next = pieces[i + 1];
+    if (next !== undefined && piece.end < to) {
+      const jump = evaluatePolynomial(next.fields.shearY, 0) - evaluatePolynomial(shear, piece.end - piece.start);
+      if (Math.abs(jump) > 1e-9 * scale) return 'central-point-load';
+    }
+  }
+  return distributed ? 'uniform-load' : null;
 }
 
 interface UnbracedLength {
@@ -68,6 +131,8 @@ interface UnbracedLength {
   readonly momentGradientFactor: number;
   /** The largest |momentZ| over [from, to] and where: the demand, also the Mmax of Cb. */
   readonly demand: { readonly value: number; readonly position: number | null };
+  /** An overhang: its length is an effective cantilever length, and no load-height factor C2 is tabulated for it. */
+  readonly overhang: boolean;
 }
 
 const isRigid = (support: SupportModel, direction: 'uz' | 'rx' | 'ry') => support.restraints[direction] === 'rigid';
@@ -95,6 +160,7 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
         effectiveLength: length,
         momentGradientFactor: given ?? 1,
         demand: largestMagnitudeOn(analysis, 'momentZ', 0, model.length),
+        overhang: false,
       },
     ];
   }
@@ -116,6 +182,7 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
         effectiveLength: length,
         momentGradientFactor: given ?? momentGradientFactorOn(analysis, segment.from, segment.to, demand.value),
         demand,
+        overhang: false,
       };
     }
     const fixedRoot = segment.supports.some((support) => isRigid(support, 'rx') && isRigid(support, 'ry'));
@@ -126,12 +193,17 @@ function unbracedLengths(context: CheckContext): UnbracedLength[] {
       effectiveLength: (fixedRoot ? 2 : 3) * length,
       momentGradientFactor: given ?? 1,
       demand,
+      overhang: true,
     };
   });
 }
 
 function notApplicable(reason: string): { readonly summary: null; readonly findings: CheckFindings } {
   return { summary: null, findings: { checks: [], notApplicable: [{ mode: 'lateral-torsional-buckling', reason }] } };
+}
+
+function unevaluated(reason: string): { readonly summary: null; readonly findings: CheckFindings } {
+  return { summary: null, findings: { checks: [], notApplicable: [], unchecked: [{ mode: 'lateral-torsional-buckling', reason }] } };
 }
 
 export function lateralTorsionalChecks(context: CheckContext): {
@@ -143,25 +215,51 @@ export function lateralTorsionalChecks(context: CheckContext): {
   if (lateralTorsional.braced) return notApplicable('the compression flange is braced continuously (lateralTorsional.braced)');
   const exclusion = lateralTorsionalExclusion(section);
   if (exclusion !== null) return notApplicable(exclusion);
-  let worst: { length: UnbracedLength; moment: number; position: number | null; criticalMoment: number } | null = null;
+  if (UNEVALUATED_SHAPES.has(section.shape)) {
+    if (largestMagnitudeOn(context.input.analysis, 'momentZ', 0, context.input.model.length).value <= 0) {
+      return notApplicable('no strong-axis bending moment (momentZ) anywhere along the member');
+    }
+    return unevaluated(`the elastic critical moment of a ${section.shape} (a monosymmetric or unsymmetric section) is not evaluated by this service; brace the compression side continuously (lateralTorsional.braced) if it is`);
+  }
+  const curve = curveOf(context);
+  const height = lateralTorsional.loadHeight ?? DEFAULT_LOAD_HEIGHT;
+  const zg = loadHeightDistance(section, context.input.dimensions, height);
+  const modulus = section.sectionModulusZ;
+  let worst: { length: UnbracedLength; moment: number; position: number | null; criticalMoment: number; resistance: ReturnType<typeof lateralTorsionalResistance> } | null = null;
   for (const length of unbracedLengths(context)) {
     const { demand } = length;
     if (demand.value <= 0) continue;
-    const criticalMoment = elasticCriticalMoment({
+    const loading = length.overhang ? null : transverseLoading(context, length.from, length.to);
+    const tabulated = loading === null ? null : criticalMomentFactors({ kind: loading });
+    let monosymmetry = 0;
+    if (section.shape === 'tee' && context.input.dimensions?.shape === 'tee') {
+      // sigma = -Mz y / Iz: a positive Mz compresses the top, where a tee's flange is.
+      const flangeInCompression = demand.position === null || fieldAt(context.input.analysis, 'momentZ', demand.position) >= 0;
+      monosymmetry = teeMonosymmetryParameter(context.input.dimensions, flangeInCompression);
+    }
+    const criticalMoment = generalCriticalMoment({
       elasticModulus: material.elasticModulus,
       shearModulus: material.shearModulus,
       secondMomentY: section.secondMomentY,
       torsionConstant: section.torsionConstant,
       warpingConstant: section.warpingConstant,
-      effectiveLength: length.effectiveLength,
-      momentGradientFactor: length.momentGradientFactor,
+      unbracedLength: length.effectiveLength,
+      factors: { c1: length.momentGradientFactor, c2: tabulated?.c2 ?? 0, c3: tabulated?.c3 ?? 1 },
+      loadHeight: zg,
+      monosymmetryParameter: monosymmetry,
     });
-    if (worst === null || demand.value / criticalMoment > worst.moment / worst.criticalMoment) {
-      worst = { length, moment: demand.value, position: demand.position, criticalMoment };
+    if (!(criticalMoment > 0) || !Number.isFinite(criticalMoment)) {
+      // Loads past the range of finite arithmetic (the moment diagram overflows C1): no number to check against.
+      throw new EngineError('not-applicable', `The lateral-torsional buckling check has no positive, finite critical moment (${criticalMoment}).`, [], { mode, criticalMoment });
+    }
+    const resistance = lateralTorsionalResistance({ sectionModulus: modulus, yieldStrength: material.yieldStrength, criticalMoment, curve });
+    if (worst === null || demand.value / resistance.resistance > worst.moment / worst.resistance.resistance) {
+      worst = { length, moment: demand.value, position: demand.position, criticalMoment, resistance };
     }
   }
   if (worst === null) return notApplicable('no strong-axis bending moment (momentZ) anywhere along the member');
-  const { length } = worst;
+  const { length, resistance } = worst;
+  const heightText = height === 'shear-centre' ? 'load through the shear centre' : `load ${fourSignificantText(zg)} m from the shear centre on the destabilising side (${typeof height === 'object' ? 'given' : height})`;
   return {
     summary: {
       from: length.from,
@@ -170,6 +268,11 @@ export function lateralTorsionalChecks(context: CheckContext): {
       effectiveLength: length.effectiveLength,
       momentGradientFactor: length.momentGradientFactor,
       criticalMoment: worst.criticalMoment,
+      relativeSlenderness: resistance.lambdaBar,
+      reductionFactor: resistance.chi,
+      resistance: resistance.resistance,
+      curve,
+      loadHeight: zg,
     },
     findings: {
       checks: [
@@ -177,11 +280,11 @@ export function lateralTorsionalChecks(context: CheckContext): {
           mode,
           quantity: 'moment',
           demand: worst.moment,
-          capacity: worst.criticalMoment,
+          capacity: resistance.resistance,
           requiredSafetyFactor: context.criteria.requiredSafetyFactor[mode],
           position: worst.position,
           location: `unbraced length ${rangeLabel(length.from, length.to)}`,
-          basis: `largest |Mz| against the elastic M_cr = C1 (pi / L) sqrt(E Iy G J) sqrt(1 + pi^2 E Iw / (G J L^2)), C1 = ${fourSignificantText(length.momentGradientFactor)} (Timoshenko & Gere 2nd ed., ch. 6, from memory; Cb by AISC 360-16 eq. F1-1, from memory)`,
+          basis: `largest |Mz| against M_b = chi_LT W fy (EN 1993-1-1:2005 6.3.2.2, curve ${curve}, from memory), chi_LT = ${fourSignificantText(resistance.chi)} at lambda_LT = ${fourSignificantText(resistance.lambdaBar)}, from the elastic M_cr = ${fourSignificantText(worst.criticalMoment)} N*m of the three-factor formula (ENV 1993-1-1 Annex F / SN003, from memory), C1 = ${fourSignificantText(length.momentGradientFactor)} (AISC 360-16 eq. F1-1 for spans, from memory), ${heightText}`,
         }),
       ],
       notApplicable: [],

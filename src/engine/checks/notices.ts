@@ -11,10 +11,11 @@ import { productMomentOf, transverseShearPerForce } from './section-stresses.js'
 /** The caution every result opens with. */
 export const CAUTION_NOTICE = SCREENING_CAUTION;
 export const EXCLUSIONS_NOTICE =
-  'Stress concentrations, fatigue, and connections other than the declared pins are not included.';
+  'Stress concentrations, fatigue under repeated loads, and connections other than the declared pins are not included.';
 export const COLUMN_NOTICE =
   'The column formulas assume a straight, concentrically loaded column equivalent to a pin-ended one of length K L.';
-export const LOCAL_BUCKLING_NOTICE = 'Local buckling of thin walls, flanges and webs is not checked.';
+export const LOCAL_BUCKLING_NOTICE =
+  'The plates are classed by their width-to-thickness ratios (EN 1993-1-1 Table 5.2, from memory): a slender (class 4) plate is listed as unchecked; within the class 3 limits local buckling is taken not to come before yield. No plastic reserve is counted on (elastic section moduli).';
 export const BRITTLE_NOTICE =
   'Brittle material: the strength checks use the ultimate strengths (no yield), and modified Mohr for combined stresses.';
 export const ELEMENTARY_SHEAR_NOTICE = 'The transverse shear stress V Q / (I b) is the elementary beam-theory value.';
@@ -25,13 +26,15 @@ export const UNSYMMETRIC_NOTICE =
 export const SHEAR_CENTRE_NOTICE =
   'Loads are taken to act through the shear centre: a load through the web or the centroid of a channel, tee or angle also twists it, and that torsion is not included.';
 export const WARPING_NOTICE =
-  'Torsion is taken as uniform (Saint-Venant): where an open section is restrained against warping (a fixed end), warping normal stresses add to the bending stresses and are not included.';
+  'An open section under torque warps wherever the torque or the restraint changes along it (at a point torque, a support, a fixed end): its warping normal and shear stresses, from the exact non-uniform torsion solution with forks at supports that hold twist (fixed supports also holding warping), are added in a combined check at the flange tips, as an upper bound. Twist and the torsional shear elsewhere are still from uniform (Saint-Venant) torsion, which overstates them.';
 export const WEB_TOE_NOTICE =
   'The combined stress is evaluated at the extreme fibres and at the neutral axis, not at the web at the root of the fillets, where bending and shear of a short, heavily loaded I-section or channel can combine to about 10 % more.';
 export const BIAXIAL_SHEAR_NOTICE =
   'Shear acts along both y and z: the larger direction is checked; on a solid section the two can meet at the centroid, where their resultant can reach up to sqrt(2) times the larger.';
+export const RUNWAY_DEFLECTION_NOTICE =
+  'The default deflection limits (L/250 for spans, L/180 for overhangs) are general ones (common practice); crane and gantry runway girders and monorail beams are usually held to far stricter limits, of the order of L/600 to L/1000 vertically and L/500 sideways (common practice, set by the crane maker and the governing code): give deflectionLimitRatio.';
 export const LATERAL_TORSIONAL_NOTICE =
-  'Lateral-torsional buckling is checked elastically (the inelastic range is not covered); a support that holds the member laterally is taken as a fork that also prevents twist.';
+  'Lateral-torsional buckling: a support that holds the member laterally is taken as a fork that also prevents twist; the load acts on the top flange unless lateralTorsional.loadHeight says otherwise, taken on the destabilising side; the resistance is reduced for the inelastic range by EN 1993-1-1 6.3.2.2 (from memory).';
 export const AMPLIFICATION_NOTICE =
   'The beam-column check takes the largest compressive force and the largest moments together, wherever they occur.';
 
@@ -82,6 +85,11 @@ export function memberNotices(context: CheckContext, checks: readonly FailureChe
   const { section } = input;
   const notices = [CAUTION_NOTICE, EXCLUSIONS_NOTICE];
   if (criteria.defaulted.length > 0) notices.push(defaultsNotice(criteria.defaulted));
+  if (wasChecked(checks, 'deflection') && criteria.defaulted.includes('deflectionLimitRatio')) notices.push(RUNWAY_DEFLECTION_NOTICE);
+  if (criteria.keptDefaults !== undefined) {
+    const kept = criteria.keptDefaults.map((key) => `${key} ${criteria.requiredSafetyFactor[key]}`).join(', ');
+    notices.push(`A single requiredSafetyFactor never lowers a mode below its default (common practice): ${kept} kept. Give factors by mode to set them lower.`);
+  }
   if (input.material.behaviour === 'brittle') notices.push(BRITTLE_NOTICE);
   if (THIN_WALLED_SHAPES.has(section.shape)) notices.push(LOCAL_BUCKLING_NOTICE);
   for (const [property, notice] of STAND_IN_NOTICE_ENTRIES) {

@@ -6,13 +6,15 @@
  *   material's shear strength (average direct shear on the shear planes, Shigley 10th ed., ch. 3, from
  *   memory);
  * - bearing: sigma = R / (d t) on the projected area, against the lower compressive strength of the
- *   pin and of the member material (the plate is taken to be of the member's material).
+ *   pin and of the member material (the plate is taken to be of the member's material);
+ * - bending: sigma = M / (pi d^3 / 32) against the pin's yield strength, with M from pin-bending.ts.
  */
 
 import { EngineError } from '../engine-error.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
 import type { FailureCheck } from './check-outcome.js';
 import { failureCheck } from './failure-check.js';
+import { pinBendingMoment } from './pin-bending.js';
 import { materialStrengths } from './strengths.js';
 
 export function pinChecks(context: CheckContext): CheckFindings {
@@ -57,6 +59,19 @@ export function pinChecks(context: CheckContext): CheckFindings {
         basis: `sigma = R / (d t) on the projected area (Shigley 10th ed., ch. 3, from memory) against the lower ${plateWeaker ? 'member' : 'pin'} ${plateWeaker ? strengths.compression.symbol : pinStrengths.compression.symbol}`,
       }),
     );
+    const bending = pinBendingMoment(pin, force);
+    checks.push(
+      failureCheck({
+        mode: 'pin-bending',
+        quantity: 'stress',
+        demand: bending.moment / ((Math.PI * pin.diameter ** 3) / 32),
+        capacity: pinStrengths.tension.value,
+        requiredSafetyFactor: criteria.requiredSafetyFactor['pin-bending'],
+        position: reaction.position,
+        location: `pin at support ${pin.support} (${shearKind}), gap ${pin.gap} m`,
+        basis: `sigma = M / (pi d^3 / 32), ${bending.basis}, against the pin's ${pinStrengths.tension.symbol}`,
+      }),
+    );
   });
   if (checks.length > 0) return { checks, notApplicable: [] };
   const reason = 'no pin declared at any support (pins)';
@@ -65,6 +80,7 @@ export function pinChecks(context: CheckContext): CheckFindings {
     notApplicable: [
       { mode: 'pin-shear', reason },
       { mode: 'pin-bearing', reason },
+      { mode: 'pin-bending', reason },
     ],
   };
 }

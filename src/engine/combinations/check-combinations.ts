@@ -19,9 +19,10 @@ import { DIAGRAM_FIELDS, type DiagramField, type MemberAnalysis } from '../analy
 import { ZERO_TOLERANCE, withoutNegativeZero } from '../analysis/tolerances.js';
 import type { MemberCheckInput } from '../checks/check-input.js';
 import { checkMember } from '../checks/check-member.js';
-import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck } from '../checks/check-outcome.js';
+import type { FailureCheck, MemberCheckOutcome, NotApplicableCheck, UncheckedMode } from '../checks/check-outcome.js';
 import { FAILURE_MODES, type FailureMode } from '../checks/failure-mode.js';
 import { governingFailure } from '../checks/governing.js';
+import { verdictOf } from '../checks/verdict.js';
 import { EngineError } from '../engine-error.js';
 import type { LoadModel, MemberModel } from '../member/model.js';
 import { validateMemberModel } from '../member/validate-model.js';
@@ -50,6 +51,8 @@ export interface LoadState {
   readonly analysis: MemberAnalysis;
   /** The checks of the combination's purpose only. */
   readonly outcome: MemberCheckOutcome;
+  /** The modes of the other purpose that the member would be checked for (with a demand, or left unchecked). */
+  readonly otherPurposeModes: readonly FailureMode[];
 }
 
 /** An extreme of a diagram over the member and every train position: its value, where on the member, and where the train stood. */
@@ -126,13 +129,23 @@ function servesPurpose(mode: FailureMode, purpose: CombinationPurpose): boolean 
 /** The outcome with only the checks of the purpose, its governing check and verdict taken again. */
 function outcomeForPurpose(outcome: MemberCheckOutcome, purpose: CombinationPurpose): MemberCheckOutcome {
   const checks = outcome.checks.filter((check) => servesPurpose(check.mode, purpose));
+  const unchecked = outcome.unchecked.filter((gap) => servesPurpose(gap.mode, purpose));
   return {
     ...outcome,
     checks,
     notApplicable: outcome.notApplicable.filter((reason) => servesPurpose(reason.mode, purpose)),
+    unchecked,
     governing: governingFailure(checks),
-    verdict: checks.every((check) => check.passes) ? 'pass' : 'fail',
+    verdict: verdictOf(checks, unchecked),
   };
+}
+
+/** The modes of the purpose a combination does not serve that apply to the member: checks with a demand, and modes left unchecked. */
+function otherPurposeModesOf(outcome: MemberCheckOutcome, purpose: CombinationPurpose): FailureMode[] {
+  const modes = new Set<FailureMode>();
+  for (const check of outcome.checks) if (!servesPurpose(check.mode, purpose) && check.demand > 0) modes.add(check.mode);
+  for (const gap of outcome.unchecked) if (!servesPurpose(gap.mode, purpose)) modes.add(gap.mode);
+  return [...modes];
 }
 
 /** Each load case's loads must lie on the member: checked case by case so the pointer names the case. */
@@ -216,8 +229,8 @@ function refinedMaximum(positions: readonly number[], values: readonly number[],
 function evaluateState(member: Omit<MemberModel, 'loads'>, loads: readonly LoadModel[], input: CombinationsInput, purpose: CombinationPurpose): LoadState {
   const model: MemberModel = { ...member, loads };
   const analysis = analyseMember(model);
-  const outcome = outcomeForPurpose(checkMember({ ...input.checks, analysis, model }), purpose);
-  return { model, analysis, outcome };
+  const whole = checkMember({ ...input.checks, analysis, model });
+  return { model, analysis, outcome: outcomeForPurpose(whole, purpose), otherPurposeModes: otherPurposeModesOf(whole, purpose) };
 }
 
 function movingLoadOf(combination: CombinationModel, index: number, movingLoads: readonly MovingLoadModel[]): { train: MovingLoadModel; factor: number } | null {
@@ -427,7 +440,9 @@ function aggregateOutcome(results: readonly CombinationResult[], worstChecks: re
   if (shown < 0) shown = governing;
   const checked = new Set(checks.map((check) => check.mode));
   const notApplicable: NotApplicableCheck[] = [];
+  const unchecked: UncheckedMode[] = [];
   const seenModes = new Set<FailureMode>();
+  const uncheckedModes = new Set<FailureMode>();
   const notices: string[] = [];
   const seenNotices = new Set<string>();
   for (const result of results) {
@@ -436,18 +451,29 @@ function aggregateOutcome(results: readonly CombinationResult[], worstChecks: re
       seenModes.add(reason.mode);
       notApplicable.push(reason);
     }
+    for (const gap of result.state.outcome.unchecked) {
+      if (uncheckedModes.has(gap.mode)) continue;
+      uncheckedModes.add(gap.mode);
+      unchecked.push(gap);
+    }
     for (const notice of result.state.outcome.notices) {
       if (seenNotices.has(notice)) continue;
       seenNotices.add(notice);
       notices.push(notice);
     }
   }
-  // A purpose no combination serves leaves its modes unchecked: say so rather than let them vanish.
+  // A purpose no combination serves leaves its modes unchecked: those that apply to the member make the
+  // verdict 'not-verified'; the rest are listed as not applicable, so no mode vanishes without a word.
   for (const [purpose, modes] of [['strength', STRENGTH_MODES], ['serviceability', SERVICEABILITY_MODES]] as const) {
     if (results.some((result) => result.combination.purpose === purpose)) continue;
+    const applying = new Set(results.flatMap((result) => result.state.otherPurposeModes));
+    const reason = `no ${purpose} combination was given, so this mode was not checked`;
     for (const mode of modes) {
-      if (checked.has(mode) || seenModes.has(mode)) continue;
-      notApplicable.push({ mode, reason: `no ${purpose} combination was given, so this mode was not checked` });
+      if (checked.has(mode) || seenModes.has(mode) || uncheckedModes.has(mode)) continue;
+      if (applying.has(mode)) {
+        uncheckedModes.add(mode);
+        unchecked.push({ mode, reason });
+      } else notApplicable.push({ mode, reason });
     }
     notices.push(`No ${purpose} combination was given: the ${purpose === 'strength' ? 'strength and stability' : 'deflection and twist'} checks were not made.`);
   }
@@ -458,8 +484,9 @@ function aggregateOutcome(results: readonly CombinationResult[], worstChecks: re
     outcome: {
       checks,
       notApplicable,
+      unchecked,
       governing: governingCheck,
-      verdict: checks.every((check) => check.passes) ? 'pass' : 'fail',
+      verdict: verdictOf(checks, unchecked),
       buckling: base.buckling,
       lateralTorsionalBuckling: base.lateralTorsionalBuckling,
       stresses: base.stresses,

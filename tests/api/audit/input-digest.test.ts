@@ -54,8 +54,10 @@ describe('audit', () => {
     const base = (await post(inMetres)).audit.inputDigest;
     const heavier = (await post({ ...inMetres, loads: [{ ...inMetres.loads[0], qy: -5001 }] })).audit.inputDigest;
     const fewerSamples = (await post({ ...inMetres, output: { samples: 11 } })).audit.inputDigest;
-    const withSelfWeight = (await post({ ...inMetres, selfWeight: true })).audit.inputDigest;
-    expect(new Set([base, heavier, fewerSamples, withSelfWeight]).size).toBe(4);
+    // Self-weight is on by default for a catalogue section: leaving it out changes the input, saying true does not.
+    const withoutSelfWeight = (await post({ ...inMetres, selfWeight: false })).audit.inputDigest;
+    expect(new Set([base, heavier, fewerSamples, withoutSelfWeight]).size).toBe(4);
+    expect((await post({ ...inMetres, selfWeight: true })).audit.inputDigest).toBe(base);
   });
 
   it('is carried by batch items, sizing and section properties too', async () => {

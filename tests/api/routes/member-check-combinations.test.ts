@@ -29,7 +29,14 @@ const beam = {
   section: { designation: 'IPE 200' },
   material: { grade: 'S355' },
   output: { samples: 5 },
+  // The hand values leave the beam's own weight out.
+  selfWeight: false,
 };
+/** A factored strength combination and its serviceability partner, so every mode is checked. */
+const sizingCombinations = [
+  { id: 'heavy', purpose: 'strength', factors: { grating: 1.35, goods: 1.5 } },
+  { id: 'in service', purpose: 'serviceability', factors: { grating: 1, goods: 1 } },
+];
 const grating = { type: 'distributed', from: 0, to: 3.6, qy: -1200 };
 const goods = { type: 'point', position: 1.2, fy: -8000 };
 const cases = [
@@ -188,8 +195,12 @@ describe('moving loads: the whole pass and every check at its worst', () => {
     expect(response.body.reactions[0].fy).toBeCloseTo((1.35 * 1200 * 3.6 * 7.2) / 9 + (1.5 * 8000 * 7.8) / 9, 6);
     expect(response.body.loadCombinations.reactions[0].max.fy.combination).toBe('factored');
     const onlyStrength = await post({ ...span, loadCases: cases, combinations: [{ id: 'factored', purpose: 'strength', factors: { grating: 1.35, goods: 1.5 } }] });
-    const reasons = onlyStrength.body.notApplicable as { mode: string; reason: string }[];
-    expect(reasons.find((reason) => reason.mode === 'deflection')?.reason).toMatch(/no serviceability combination/);
+    // Deflection applies to the member but no combination checked it: unchecked, and the verdict is not 'pass'.
+    const gaps = onlyStrength.body.unchecked as { mode: string; reason: string }[];
+    expect(gaps.find((gap) => gap.mode === 'deflection')?.reason).toMatch(/no serviceability combination/);
+    expect(onlyStrength.body.verdict).toBe('not-verified');
+    // Twist does not apply (no torque): it stays not applicable.
+    expect((onlyStrength.body.notApplicable as { mode: string }[]).some((reason) => reason.mode === 'twist')).toBe(true);
     expect(onlyStrength.body.notices.some((notice: string) => notice.startsWith('No serviceability combination was given'))).toBe(true);
   });
 });
@@ -275,14 +286,22 @@ describe('limits on load combinations', () => {
 });
 
 describe('sizing with load combinations', () => {
+  it('refuses to select a section that is not verified: a strength combination alone leaves deflection unchecked', async () => {
+    const response = await request(app.server)
+      .post('/v1/member-sizing')
+      .send({ ...beam, section: undefined, loadCases: cases, combinations: [sizingCombinations[0]], candidates: { family: 'IPE' } });
+    expect(response.status).toBe(422);
+    expect(response.body.detail).toContain('It is not verified: deflection');
+  });
+
   it('sizes against the governing combination', async () => {
     const response = await request(app.server)
       .post('/v1/member-sizing')
-      .send({ ...beam, section: undefined, loadCases: cases, combinations: [{ id: 'heavy', purpose: 'strength', factors: { grating: 1.35, goods: 1.5 } }], candidates: { family: 'IPE' } });
+      .send({ ...beam, section: undefined, loadCases: cases, combinations: sizingCombinations, candidates: { family: 'IPE' } });
     expect(response.status, JSON.stringify(response.body).slice(0, 300)).toBe(200);
     const selected = response.body.selected;
     // The selected section checked on its own with the same combination answers the same utilization and passes.
-    const single = await post({ ...beam, section: { designation: selected.designation }, loadCases: cases, combinations: [{ id: 'heavy', purpose: 'strength', factors: { grating: 1.35, goods: 1.5 } }] });
+    const single = await post({ ...beam, section: { designation: selected.designation }, loadCases: cases, combinations: sizingCombinations });
     expect(single.body.verdict).toBe('pass');
     expect(response.body.candidates[0].utilization).toBeCloseTo(single.body.governing.utilization, 12);
     expect(selected.result.loadCombinations.governing).toBe('heavy');

@@ -46,9 +46,9 @@ describe('checkMember with hand-built analyses', () => {
     expectFinite(outcome);
   });
 
-  it('reports every failure mode once, as a check or as not applicable', () => {
+  it('reports every failure mode once, as a check, as not applicable or as unchecked', () => {
     const outcome = checkMember(inputOf({ analysis: simpleSpanUniformLoad(4, 10e3, 1.4e7), section: iSection(0.2, 0.1, 0.0056, 0.0085), material: steel }));
-    const reported = [...outcome.checks.map((c) => c.mode), ...outcome.notApplicable.map((n) => n.mode)].sort();
+    const reported = [...outcome.checks.map((c) => c.mode), ...outcome.notApplicable.map((n) => n.mode), ...outcome.unchecked.map((n) => n.mode)].sort();
     expect(reported).toEqual([...FAILURE_MODES].sort());
   });
 
@@ -184,7 +184,7 @@ describe('checkMember through analyseMember and sectionProperties', () => {
     // d = 30 mm, L = 1 m fixed at 0, T = 200 N*m at the end: twist = 200 / (G pi 0.03^4 / 32) = 0.03144 rad.
     const section = sectionProperties({ shape: 'round', diameter: 0.03 });
     const input = analysedInput(section, steel, 1, [support(0, FIXED)], [{ kind: 'point', position: 1, ...FREE_LOAD, mx: 200, fy: -500 }], {
-      pins: [{ support: 0, diameter: 0.012, material: steel, shearPlanes: 2, plateThickness: 0.01 }],
+      pins: [{ support: 0, diameter: 0.012, material: steel, shearPlanes: 2, plateThickness: 0.01, clevisPlateThickness: 0.005, gap: 0 }],
     });
     const outcome = checkMember(input);
     const twist = outcome.checks.find((c) => c.mode === 'twist');

@@ -4,14 +4,17 @@ import { FAILURE_MODES } from '../../../src/engine/checks/failure-mode.js';
 import { castIron, steel } from './fixtures/materials.js';
 
 describe('resolveCriteria', () => {
-  it('fills the documented defaults: 1.5 on yield, 2.0 on ultimate, 2.5 on instability, 1.0 on serviceability', () => {
+  it('fills the documented defaults: 1.5 on yield and design-curve resistances, 2.0 on ultimate, 2.5 on elastic instability, 1.0 on serviceability', () => {
     const criteria = resolveCriteria({}, steel);
     expect(criteria.requiredSafetyFactor.tension).toBe(1.5);
     expect(criteria.requiredSafetyFactor.combined).toBe(1.5);
     expect(criteria.requiredSafetyFactor['pin-shear']).toBe(1.5);
     expect(criteria.requiredSafetyFactor['tension-ultimate']).toBe(2.0);
     expect(criteria.requiredSafetyFactor.buckling).toBe(2.5);
-    expect(criteria.requiredSafetyFactor['lateral-torsional-buckling']).toBe(2.5);
+    expect(criteria.requiredSafetyFactor['lateral-torsional-buckling']).toBe(1.5);
+    expect(criteria.requiredSafetyFactor['web-shear-buckling']).toBe(1.5);
+    expect(criteria.requiredSafetyFactor['flexural-torsional-buckling']).toBe(2.5);
+    expect(criteria.requiredSafetyFactor['pin-bending']).toBe(1.5);
     expect(criteria.requiredSafetyFactor.deflection).toBe(1.0);
     expect(criteria.requiredSafetyFactor.twist).toBe(1.0);
     expect(criteria.deflectionLimitRatio).toBe(250);
@@ -34,6 +37,16 @@ describe('resolveCriteria', () => {
   it('gives every failure mode a factor', () => {
     const criteria = resolveCriteria();
     for (const mode of FAILURE_MODES) expect(criteria.requiredSafetyFactor[mode]).toBeGreaterThan(0);
+  });
+
+  it('takes a single number as a floor: it never lowers a mode below its default, and says which it kept', () => {
+    const criteria = resolveCriteria({ requiredSafetyFactor: 1.5 }, steel);
+    expect(criteria.requiredSafetyFactor.bending).toBe(1.5);
+    expect(criteria.requiredSafetyFactor.buckling).toBe(2.5);
+    expect(criteria.requiredSafetyFactor['tension-ultimate']).toBe(2.0);
+    expect(criteria.keptDefaults).toEqual(['tension-ultimate', 'buckling', 'eccentric-column', 'flexural-torsional-buckling', 'local-buckling', 'ultimate']);
+    // By mode, a factor is taken as given, lower or not.
+    expect(resolveCriteria({ requiredSafetyFactor: { buckling: 1.2 } }, steel).requiredSafetyFactor.buckling).toBe(1.2);
   });
 
   it('applies a single number to every strength and stability mode but not to deflection and twist', () => {

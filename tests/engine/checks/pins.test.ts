@@ -15,6 +15,8 @@ const pin = (overrides: Partial<PinInput> = {}): PinInput => ({
   material: steel,
   shearPlanes: 1,
   plateThickness: 0.005,
+  clevisPlateThickness: 0.005,
+  gap: 0,
   ...overrides,
 });
 const checksFor = (pins: PinInput[]) => pinChecks(contextOf({ analysis, section: rectangle(0.05, 0.1), material: steel, pins })).checks;
@@ -44,7 +46,23 @@ describe('pinChecks', () => {
   it('lists the pin modes as not applicable when no pin is declared', () => {
     const findings = pinChecks(contextOf({ analysis, section: rectangle(0.05, 0.1), material: steel }));
     expect(findings.checks).toHaveLength(0);
-    expect(findings.notApplicable.map((n) => n.mode)).toEqual(['pin-shear', 'pin-bearing']);
+    expect(findings.notApplicable.map((n) => n.mode)).toEqual(['pin-shear', 'pin-bearing', 'pin-bending']);
+  });
+
+  it('bends a clevis pin by F (b + 4c + 2a) / 8 (EN 1993-1-8:2005 Table 3.10, from memory)', () => {
+    // R = 5 kN, b = 5 mm, a = 2.5 mm, c = 1 mm: M = 5000 (0.005 + 0.004 + 0.005) / 8 = 8.75 N*m;
+    // pi d^3 / 32 = pi 1e-6 / 32 = 9.8175e-8 m^3, sigma = 89.13 MPa, against Sy 355 MPa of the pin.
+    const bending = checksFor([pin({ shearPlanes: 2, clevisPlateThickness: 0.0025, gap: 0.001 })]).find((c) => c.mode === 'pin-bending');
+    expect(bending?.demand).toBeCloseTo(8.75 / ((Math.PI * 0.01 ** 3) / 32), 3);
+    expect((bending?.demand ?? 0) / 1e6).toBeCloseTo(89.13, 2);
+    expect(bending?.capacity).toBe(355e6);
+    expect(bending?.basis).toContain('EN 1993-1-8');
+  });
+
+  it('bends a single-shear pin as a cantilever to the mid-thickness of the thicker plate (common practice)', () => {
+    // M = 5000 (0.002 + 0.008 / 2) = 30 N*m.
+    const bending = checksFor([pin({ plateThickness: 0.008, clevisPlateThickness: 0.005, gap: 0.002 })]).find((c) => c.mode === 'pin-bending');
+    expect(bending?.demand).toBeCloseTo(30 / ((Math.PI * 0.01 ** 3) / 32), 3);
   });
 
   it('refuses a pin at a support that does not exist', () => {

@@ -35,6 +35,8 @@ export const RUNWAY_DEFLECTION_NOTICE =
   'The default deflection limits (L/250 for spans, L/180 for overhangs) are general ones (common practice); crane and gantry runway girders and monorail beams are usually held to far stricter limits, of the order of L/600 to L/1000 vertically and L/500 sideways (common practice, set by the crane maker and the governing code): give deflectionLimitRatio.';
 export const LATERAL_TORSIONAL_NOTICE =
   'Lateral-torsional buckling: a support that holds the member laterally is taken as a fork that also prevents twist; the load acts on the top flange unless lateralTorsional.loadHeight says otherwise, taken on the destabilising side; the resistance is reduced for the inelastic range by EN 1993-1-1 6.3.2.2 (from memory).';
+export const CUSTOM_LATERAL_TORSIONAL_NOTICE =
+  'A custom section is taken as doubly symmetric in lateral-torsional buckling (shear centre at mid-depth), with the torsion constant, warping constant (0 when not given, the low side) and minor-axis second moment given; its plates are not known, so local buckling is left unchecked: give the section as a shape where one fits.';
 export const AMPLIFICATION_NOTICE =
   'The beam-column check takes the largest compressive force and the largest moments together, wherever they occur.';
 
@@ -113,7 +115,10 @@ export function memberNotices(context: CheckContext, checks: readonly FailureChe
       }
     }
   }
-  if (wasChecked(checks, 'lateral-torsional-buckling')) notices.push(LATERAL_TORSIONAL_NOTICE);
+  if (wasChecked(checks, 'lateral-torsional-buckling')) {
+    notices.push(LATERAL_TORSIONAL_NOTICE);
+    if (section.shape === 'custom') notices.push(CUSTOM_LATERAL_TORSIONAL_NOTICE);
+  }
   if (wasChecked(checks, 'beam-column')) notices.push(AMPLIFICATION_NOTICE);
   if (checks.every((check) => check.utilization === 0)) {
     notices.push(NO_DEMAND_NOTICE);

@@ -380,7 +380,7 @@ export interface components {
                  * @enum {string}
                  */
                 curve: "a" | "b" | "c" | "d";
-                /** @description The load's distance from the shear centre, taken on the destabilising side. In the response's length unit (SI: m). */
+                /** @description zg: the load's distance from the shear centre, positive where it destabilises (acting towards the shear centre, as gravity on the top flange), negative where it stabilises. In the response's length unit (SI: m). */
                 loadHeight: number;
             };
             stresses: components["schemas"]["Stresses"];
@@ -2230,7 +2230,7 @@ export interface components {
             braced?: boolean;
             /** @description Moment-gradient factor C1 (Cb); default from the moment diagram (AISC 360-16, eq. F1-1). */
             momentGradientFactor?: number;
-            /** @description Where the transverse loads act on the section: shear-centre, top-flange (default: the safe side for gravity loads), bottom-flange, or a distance from the shear centre. Taken on the destabilising side whichever way the load acts. */
+            /** @description Where the transverse loads act on the section: shear-centre, top-flange (default: the safe side for gravity loads), bottom-flange, or a distance above the shear centre (negative below). A load acting towards the shear centre from where it is applied destabilises (gravity on the top flange), one acting away from it stabilises; the direction is read from the net load on each span, and taken as destabilising where the loads cancel. */
             loadHeight?: ("shear-centre" | "top-flange" | "bottom-flange") | {
                 /**
                  * @description The load's distance from the shear centre. A number in m, or a string with a unit, e.g. "250 mm".

@@ -58,7 +58,7 @@ export const lateralTorsionalInput = z
         z.strictObject({ aboveShearCentre: quantity('length', "The load's distance from the shear centre.") }),
       ])
       .optional()
-      .openapi({ description: 'Where the transverse loads act on the section: shear-centre, top-flange (default: the safe side for gravity loads), bottom-flange, or a distance from the shear centre. Taken on the destabilising side whichever way the load acts.' }),
+      .openapi({ description: 'Where the transverse loads act on the section: shear-centre, top-flange (default: the safe side for gravity loads), bottom-flange, or a distance above the shear centre (negative below). A load acting towards the shear centre from where it is applied destabilises (gravity on the top flange), one acting away from it stabilises; the direction is read from the net load on each span, and taken as destabilising where the loads cancel.' }),
   })
   .openapi('LateralTorsionalOptions', { description: 'Lateral-torsional buckling of open sections bent about z (I-sections, channels, tees, custom sections, narrow rectangles).' });
 

@@ -86,7 +86,7 @@ export const checksOutput = {
       reductionFactor: z.number().openapi({ description: 'chi_LT of EN 1993-1-1 6.3.2.2, dimensionless.' }),
       resistance: presentedQuantity('moment', 'M_b = chi_LT W fy, the capacity of the check.'),
       curve: z.enum(['a', 'b', 'c', 'd']).openapi({ description: 'The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d.' }),
-      loadHeight: presentedQuantity('length', "The load's distance from the shear centre, taken on the destabilising side."),
+      loadHeight: presentedQuantity('length', "zg: the load's distance from the shear centre, positive where it destabilises (acting towards the shear centre, as gravity on the top flange), negative where it stabilises."),
     })
     .optional()
     .openapi({ description: 'Absent when lateral-torsional buckling does not apply.' }),

@@ -93,7 +93,7 @@ export interface LateralTorsionalSummary {
   readonly resistance: number;
   /** The imperfection curve, EN 1993-1-1 Table 6.4. */
   readonly curve: 'a' | 'b' | 'c' | 'd';
-  /** |zg|, m: the load's distance from the shear centre, taken on the destabilising side. */
+  /** zg, m: the load's distance from the shear centre, positive when destabilising, negative when stabilising. */
   readonly loadHeight: number;
 }
 

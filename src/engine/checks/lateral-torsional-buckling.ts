@@ -5,9 +5,9 @@
  *   M_cr = C1 pi^2 E Iy / L^2 { sqrt[Iw / Iy + L^2 G J / (pi^2 E Iy) + (C2 zg - C3 zj)^2] - (C2 zg - C3 zj) }
  * (ENV 1993-1-1:1992 Annex F / NCCI SN003, from memory; lateral-torsional-critical-moment.ts), which is
  * the classic C1 (pi / L) sqrt(E Iy G J) sqrt(1 + pi^2 E Iw / (G J L^2)) of Timoshenko & Gere (2nd ed.,
- * ch. 6) for a load through the shear centre of a doubly symmetric section. The load height zg is taken
- * on the destabilising side whichever way the load acts (the safe side); by default the load acts on
- * the top flange (lateralTorsional.loadHeight).
+ * ch. 6) for a load through the shear centre of a doubly symmetric section. The load height zg is
+ * destabilising for a load that acts towards the shear centre (gravity on the top flange), stabilising
+ * for one that acts away from it; by default the load acts on the top flange (lateralTorsional.loadHeight).
  *
  * Resistance: the inelastic reduction of EN 1993-1-1:2005 6.3.2.2 (general case, from memory),
  *   M_b = chi_LT W fy, chi_LT from lambda_LT = sqrt(W fy / M_cr) and the curve of Table 6.4,
@@ -81,16 +81,45 @@ export type LoadHeight = 'shear-centre' | 'top-flange' | 'bottom-flange' | { rea
 /** Default: the top flange, the destabilising side for gravity loads (the safe side). */
 export const DEFAULT_LOAD_HEIGHT: LoadHeight = 'top-flange';
 
-/** |zg|, m: the distance from the shear centre to where the load acts. */
-export function loadHeightDistance(section: SectionProperties, dimensions: CheckContext['input']['dimensions'], height: LoadHeight): number {
+/** m above the shear centre (negative below) of the point where the load acts. */
+export function loadPointHeight(section: SectionProperties, dimensions: CheckContext['input']['dimensions'], height: LoadHeight): number {
   if (height === 'shear-centre') return 0;
-  if (typeof height === 'object') return Math.abs(height.aboveShearCentre);
+  if (typeof height === 'object') return height.aboveShearCentre;
   if (section.shape === 'tee' && dimensions?.shape === 'tee') {
     const shearCentre = teeShearCentreHeight(dimensions);
-    return height === 'top-flange' ? dimensions.depth - shearCentre : shearCentre;
+    return height === 'top-flange' ? dimensions.depth - shearCentre : -shearCentre;
   }
   // Doubly symmetric: the shear centre at mid-depth.
-  return section.depth / 2;
+  return height === 'top-flange' ? section.depth / 2 : -section.depth / 2;
+}
+
+/**
+ * zg of the three-factor formula, positive when destabilising: a load that acts towards the shear centre
+ * from where it is applied (a gravity load on the top flange) adds to the twist of a buckling beam,
+ * one that acts away from it (a gravity load hung from the bottom flange) resists it, whichever flange
+ * is in compression (ENV 1993-1-1 Annex F, from memory). The direction is that of the net transverse
+ * load on the span; with none to read (or loads that cancel), the destabilising side is taken.
+ */
+function destabilisingLoadHeight(context: CheckContext, from: number, to: number, pointHeight: number): number {
+  const direction = Math.sign(netTransverseLoad(context, from, to));
+  return direction === 0 ? Math.abs(pointHeight) : -direction * pointHeight;
+}
+
+/** The resultant of the loads along y on (from, to), N (positive up). */
+function netTransverseLoad(context: CheckContext, from: number, to: number): number {
+  let total = 0;
+  for (const load of context.input.model.loads) {
+    if (load.kind === 'point') {
+      if (load.position > from && load.position < to) total += load.fy;
+      continue;
+    }
+    const a = Math.max(from, load.from);
+    const b = Math.min(to, load.to);
+    if (!(b > a) || !(load.to > load.from)) continue;
+    const at = (x: number) => load.qy[0] + ((load.qy[1] - load.qy[0]) * (x - load.from)) / (load.to - load.from);
+    total += ((at(a) + at(b)) / 2) * (b - a);
+  }
+  return total;
 }
 
 /** The imperfection curve of EN 1993-1-1:2005 Table 6.4 (from memory). */
@@ -223,14 +252,15 @@ export function lateralTorsionalChecks(context: CheckContext): {
   }
   const curve = curveOf(context);
   const height = lateralTorsional.loadHeight ?? DEFAULT_LOAD_HEIGHT;
-  const zg = loadHeightDistance(section, context.input.dimensions, height);
+  const pointHeight = loadPointHeight(section, context.input.dimensions, height);
   const modulus = section.sectionModulusZ;
-  let worst: { length: UnbracedLength; moment: number; position: number | null; criticalMoment: number; resistance: ReturnType<typeof lateralTorsionalResistance> } | null = null;
+  let worst: { length: UnbracedLength; moment: number; position: number | null; criticalMoment: number; zg: number; resistance: ReturnType<typeof lateralTorsionalResistance> } | null = null;
   for (const length of unbracedLengths(context)) {
     const { demand } = length;
     if (demand.value <= 0) continue;
     const loading = length.overhang ? null : transverseLoading(context, length.from, length.to);
     const tabulated = loading === null ? null : criticalMomentFactors({ kind: loading });
+    const zg = destabilisingLoadHeight(context, length.from, length.to, pointHeight);
     let monosymmetry = 0;
     if (section.shape === 'tee' && context.input.dimensions?.shape === 'tee') {
       // sigma = -Mz y / Iz: a positive Mz compresses the top, where a tee's flange is.
@@ -254,12 +284,14 @@ export function lateralTorsionalChecks(context: CheckContext): {
     }
     const resistance = lateralTorsionalResistance({ sectionModulus: modulus, yieldStrength: material.yieldStrength, criticalMoment, curve });
     if (worst === null || demand.value / resistance.resistance > worst.moment / worst.resistance.resistance) {
-      worst = { length, moment: demand.value, position: demand.position, criticalMoment, resistance };
+      worst = { length, moment: demand.value, position: demand.position, criticalMoment, zg, resistance };
     }
   }
   if (worst === null) return notApplicable('no strong-axis bending moment (momentZ) anywhere along the member');
   const { length, resistance } = worst;
-  const heightText = height === 'shear-centre' ? 'load through the shear centre' : `load ${fourSignificantText(zg)} m from the shear centre on the destabilising side (${typeof height === 'object' ? 'given' : height})`;
+  const { zg } = worst;
+  const side = zg > 0 ? 'destabilising' : 'stabilising';
+  const heightText = height === 'shear-centre' ? 'load through the shear centre' : `load ${fourSignificantText(Math.abs(zg))} m from the shear centre, ${side} (${typeof height === 'object' ? 'given' : height})`;
   return {
     summary: {
       from: length.from,

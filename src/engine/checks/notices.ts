@@ -34,7 +34,7 @@ export const BIAXIAL_SHEAR_NOTICE =
 export const RUNWAY_DEFLECTION_NOTICE =
   'The default deflection limits (L/250 for spans, L/180 for overhangs) are general ones (common practice); crane and gantry runway girders and monorail beams are usually held to far stricter limits, of the order of L/600 to L/1000 vertically and L/500 sideways (common practice, set by the crane maker and the governing code): give deflectionLimitRatio.';
 export const LATERAL_TORSIONAL_NOTICE =
-  'Lateral-torsional buckling: a support that holds the member laterally is taken as a fork that also prevents twist; the load acts on the top flange unless lateralTorsional.loadHeight says otherwise, taken on the destabilising side; the resistance is reduced for the inelastic range by EN 1993-1-1 6.3.2.2 (from memory).';
+  'Lateral-torsional buckling: a support that holds the member laterally is taken as a fork that also prevents twist; the load acts on the top flange unless lateralTorsional.loadHeight says otherwise, and destabilises when it acts towards the shear centre (gravity on the top flange); the resistance is reduced for the inelastic range by EN 1993-1-1 6.3.2.2 (from memory).';
 export const CUSTOM_LATERAL_TORSIONAL_NOTICE =
   'A custom section is taken as doubly symmetric in lateral-torsional buckling (shear centre at mid-depth), with the torsion constant, warping constant (0 when not given, the low side) and minor-axis second moment given; its plates are not known, so local buckling is left unchecked: give the section as a shape where one fits.';
 export const AMPLIFICATION_NOTICE =

@@ -6,11 +6,16 @@
 
 import type { CheckContext, CheckFindings } from './check-context.js';
 
-/** Rotating members: a support that holds the member in place but lets it turn (a bearing) marks a shaft. */
+/**
+ * Rotating members: a support that holds the member in place but lets it turn (a bearing), on a member
+ * that carries torque or that nothing holds against turning. A beam whose twist is held at one end only
+ * and that carries no torque is not taken for a shaft.
+ */
 function isShaft(context: CheckContext): boolean {
-  return context.input.model.supports.some(
-    (support) => support.restraints.rx === 'free' && support.restraints.uy === 'rigid' && support.restraints.uz === 'rigid',
-  );
+  const { supports } = context.input.model;
+  const bearing = supports.some((support) => support.restraints.rx === 'free' && support.restraints.uy === 'rigid' && support.restraints.uz === 'rigid');
+  const turnsFreely = supports.every((support) => support.restraints.rx === 'free');
+  return bearing && (context.peaks.torsionalShear.value > 0 || turnsFreely);
 }
 
 export function unevaluatedModes(context: CheckContext): CheckFindings {

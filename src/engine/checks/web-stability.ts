@@ -7,6 +7,7 @@
  * Assumptions (each on the safe side): no intermediate transverse stiffeners, a non-rigid end post, no
  * flange contribution to the shear resistance, and no stiff bearing length (ss = 0) under a load or at a
  * support. A force at a member end is type (c) with the load at the very end (c = 0), elsewhere type (a).
+ * A channel's one-sided flange is taken through the same formulas with its width on one side.
  */
 
 import type { ChannelDimensions, ISectionDimensions } from '../sections/dimensions.js';
@@ -15,7 +16,7 @@ import type { FailureCheck, NotApplicableCheck, UncheckedMode } from './check-ou
 import { largestMagnitudeOn } from './critical-positions.js';
 import { failureCheck } from './failure-check.js';
 import { fourSignificantText } from './number-texts.js';
-import { patchLoadingResistance, webShearBucklingResistance } from './web-resistance.js';
+import { patchLoadingResistance, steelEpsilon, webShearBucklingResistance } from './web-resistance.js';
 
 type FlangedDimensions = ISectionDimensions | ChannelDimensions;
 
@@ -79,6 +80,10 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
   } else notApplicable.push({ mode: 'web-shear-buckling', reason: 'no shear force along y anywhere along the member' });
 
   const forces = concentratedForces(context);
+  // EN 1993-1-5:2006 6.5(1) (from memory): the flange counts at most 15 eps tf either side of the web.
+  const outstandLimit = 15 * steelEpsilon(material.yieldStrength) * dimensions.flangeThickness;
+  const sides = dimensions.shape === 'i-section' ? 2 : 1;
+  const bearingFlangeWidth = Math.min(dimensions.flangeWidth, dimensions.webThickness + sides * outstandLimit);
   if (forces.length === 0) {
     notApplicable.push({ mode: 'patch-loading', reason: 'no concentrated force across the flange (a point load or a support reaction along y)' });
     return { checks, notApplicable, unchecked };
@@ -88,7 +93,7 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
     const atEnd = position <= END_TOLERANCE * model.length || position >= model.length * (1 - END_TOLERANCE);
     const patch = patchLoadingResistance({
       ...web,
-      flangeWidth: dimensions.flangeWidth,
+      flangeWidth: bearingFlangeWidth,
       flangeThickness: dimensions.flangeThickness,
       stiffBearingLength: 0,
       ...(atEnd ? { loadType: 'type-c' as const, endDistance: 0 } : { loadType: 'type-a' as const }),

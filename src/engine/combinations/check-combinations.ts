@@ -112,7 +112,7 @@ export interface CombinationsOutcome {
 
 const SERVICEABILITY_MODES: readonly FailureMode[] = ['deflection', 'twist'];
 /** Modes checked separately per span, segment or support: their location is part of what they are. */
-const LOCATED_MODES: readonly FailureMode[] = ['deflection', 'lateral-torsional-buckling', 'pin-shear', 'pin-bearing'];
+const LOCATED_MODES: readonly FailureMode[] = ['deflection', 'lateral-torsional-buckling', 'pin-shear', 'pin-bearing', 'pin-bending'];
 /**
  * Position tolerance of the refinement, relative to the member length. A smooth maximum cannot be
  * located much closer than sqrt(machine epsilon) ~ 1.5e-8 (the values there agree to rounding), and a

@@ -59,10 +59,10 @@ describe('pinChecks', () => {
     expect(bending?.basis).toContain('EN 1993-1-8');
   });
 
-  it('bends a single-shear pin as a cantilever to the mid-thickness of the thicker plate (common practice)', () => {
-    // M = 5000 (0.002 + 0.008 / 2) = 30 N*m.
+  it('bends a single-shear pin by the couple of the two plates\' bearing resultants (common practice)', () => {
+    // M = 5000 (0.008 / 2 + 0.002 + 0.005 / 2) = 5000 x 0.0085 = 42.5 N*m.
     const bending = checksFor([pin({ plateThickness: 0.008, clevisPlateThickness: 0.005, gap: 0.002 })]).find((c) => c.mode === 'pin-bending');
-    expect(bending?.demand).toBeCloseTo(30 / ((Math.PI * 0.01 ** 3) / 32), 3);
+    expect(bending?.demand).toBeCloseTo(42.5 / ((Math.PI * 0.01 ** 3) / 32), 3);
   });
 
   it('refuses a pin at a support that does not exist', () => {

@@ -376,10 +376,10 @@ export interface components {
                 /** @description M_b = chi_LT W fy, the capacity of the check. In the response's moment unit (SI: N*m). */
                 resistance: number;
                 /**
-                 * @description The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d.
+                 * @description The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d. Absent for a material other than steel, which is checked against the elastic M_cr with the factor against elastic instability.
                  * @enum {string}
                  */
-                curve: "a" | "b" | "c" | "d";
+                curve?: "a" | "b" | "c" | "d";
                 /** @description zg: the load's distance from the shear centre, positive where it destabilises (acting towards the shear centre, as gravity on the top flange), negative where it stabilises. In the response's length unit (SI: m). */
                 loadHeight: number;
             };

@@ -85,7 +85,7 @@ export const checksOutput = {
       relativeSlenderness: z.number().openapi({ description: 'lambda_LT = sqrt(W fy / M_cr), dimensionless.' }),
       reductionFactor: z.number().openapi({ description: 'chi_LT of EN 1993-1-1 6.3.2.2, dimensionless.' }),
       resistance: presentedQuantity('moment', 'M_b = chi_LT W fy, the capacity of the check.'),
-      curve: z.enum(['a', 'b', 'c', 'd']).openapi({ description: 'The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d.' }),
+      curve: z.enum(['a', 'b', 'c', 'd']).optional().openapi({ description: 'The imperfection curve of EN 1993-1-1 Table 6.4: rolled I-sections a or b, welded c or d, other sections d. Absent for a material other than steel, which is checked against the elastic M_cr with the factor against elastic instability.' }),
       loadHeight: presentedQuantity('length', "zg: the load's distance from the shear centre, positive where it destabilises (acting towards the shear centre, as gravity on the top flange), negative where it stabilises."),
     })
     .optional()

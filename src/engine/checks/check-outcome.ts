@@ -91,8 +91,8 @@ export interface LateralTorsionalSummary {
   readonly reductionFactor: number;
   /** M_b = chi_LT W fy, N*m: the capacity of the check. */
   readonly resistance: number;
-  /** The imperfection curve, EN 1993-1-1 Table 6.4. */
-  readonly curve: 'a' | 'b' | 'c' | 'd';
+  /** The imperfection curve, EN 1993-1-1 Table 6.4; absent for a material other than steel (elastic M_cr). */
+  readonly curve?: 'a' | 'b' | 'c' | 'd';
   /** zg, m: the load's distance from the shear centre, positive when destabilising, negative when stabilising. */
   readonly loadHeight: number;
 }

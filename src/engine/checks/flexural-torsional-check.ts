@@ -15,6 +15,7 @@ import { failureCheck } from './failure-check.js';
 import { columnCapacities, columnFlexuralTorsionalBuckling } from './flexural-torsional-buckling.js';
 import { fourSignificantText } from './number-texts.js';
 import { governingElementSlenderness } from './outstand-slenderness.js';
+import { steelEquivalentYieldStrength } from './structural-steel.js';
 
 /** Open shapes whose shear centre lies off the centroid: compression twists them as it bends them. */
 const OFF_CENTRE_SHAPES = new Set(['channel', 'tee', 'angle']);
@@ -65,14 +66,18 @@ function flexuralTorsional(context: CheckContext): CheckFindings {
 function localBuckling(context: CheckContext): CheckFindings {
   const { section, dimensions, material } = context.input;
   const mode = 'local-buckling' as const;
-  const compressed = context.peaks.axialCompression.value > 0;
+  // Shear, from torque or from transverse force, is compression on the diagonal: a thin wall buckles under
+  // it too (a thin tube in torsion), so it is classed as a plate in compression.
+  const sheared = context.peaks.torsionalShear.value > 0 || context.peaks.transverseShear.value > 0;
+  const compressed = context.peaks.axialCompression.value > 0 || (sheared && (section.shape === 'tube' || section.shape === 'box'));
   const bent = context.peaks.bendingCompression.value > 0;
-  if (!compressed && !bent) return { checks: [], notApplicable: [{ mode, reason: 'nothing along the member is in compression' }] };
+  if (!compressed && !bent && !sheared) return { checks: [], notApplicable: [{ mode, reason: 'nothing along the member is in compression or shear' }] };
   if (section.shape === 'rectangle' || section.shape === 'round') return { checks: [], notApplicable: [{ mode, reason: 'solid section' }] };
   if (dimensions === undefined || !PLATED_SHAPES.has(dimensions.shape)) {
     return { checks: [], notApplicable: [], unchecked: [{ mode, reason: 'the plates of a custom section are not known, so their slenderness (local buckling) cannot be classed' }] };
   }
-  const worst = governingElementSlenderness(dimensions, material.yieldStrength, compressed ? 'compression' : 'bending-about-z');
+  // EN 1993-1-1's limits are written for steel (E = 210 GPa); another material's plates are classed at the yield strength that gives them the same slenderness.
+  const worst = governingElementSlenderness(dimensions, steelEquivalentYieldStrength(material), compressed ? 'compression' : 'bending-about-z');
   if (worst === null || !worst.slender) {
     return { checks: [], notApplicable: [{ mode, reason: `every plate is within the class 3 limits of EN 1993-1-1:2005 Table 5.2 (from memory)${worst === null ? '' : `: ${worst.element}, c/t = ${fourSignificantText(worst.ratio)} <= ${fourSignificantText(worst.limitClass3)}`}` }] };
   }

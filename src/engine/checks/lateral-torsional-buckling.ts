@@ -26,10 +26,12 @@ import { rangeLabel } from './labels.js';
 import { segmentsBetweenSupports } from './member-segments.js';
 import { momentGradientFactorOn } from './moment-gradient-factor.js';
 import { fieldAt } from '../analysis/field-values.js';
+import { extremesOfField } from '../analysis/field-extremes.js';
 import { evaluatePolynomial } from '../analysis/polynomial.js';
 import { criticalMomentFactors, generalCriticalMoment, teeMonosymmetryParameter, teeShearCentreHeight } from './lateral-torsional-critical-moment.js';
 import { lateralTorsionalResistance, ltbCurve, type LateralTorsionalCurve } from './lateral-torsional-reduction.js';
 import { fourSignificantText } from './number-texts.js';
+import { isStructuralSteel } from './structural-steel.js';
 
 /** Common practice: a solid rectangle at least twice as deep as wide counts as a narrow, deep beam. */
 export const NARROW_RECTANGLE_DEPTH_RATIO = 2;
@@ -78,6 +80,9 @@ const UNEVALUATED_SHAPES = new Set(['angle']);
 /** Where the transverse load acts, relative to the shear centre. */
 export type LoadHeight = 'shear-centre' | 'top-flange' | 'bottom-flange' | { readonly aboveShearCentre: number };
 
+/** A load height farther than this many section depths from the shear centre is refused. */
+const MAX_LOAD_HEIGHT_DEPTHS = 10;
+
 /** Default: the top flange, the destabilising side for gravity loads (the safe side). */
 export const DEFAULT_LOAD_HEIGHT: LoadHeight = 'top-flange';
 
@@ -100,7 +105,9 @@ export function loadPointHeight(section: SectionProperties, dimensions: CheckCon
  * is in compression (ENV 1993-1-1 Annex F, from memory). The direction is that of the net transverse
  * load on the span; with none to read (or loads that cancel), the destabilising side is taken.
  */
-function destabilisingLoadHeight(context: CheckContext, from: number, to: number, pointHeight: number): number {
+function destabilisingLoadHeight(context: CheckContext, from: number, to: number, pointHeight: number, given: boolean): number {
+  // Not given: the load may hang from either flange and act either way, so the destabilising side.
+  if (!given) return Math.abs(pointHeight);
   const direction = Math.sign(netTransverseLoad(context, from, to));
   return direction === 0 ? Math.abs(pointHeight) : -direction * pointHeight;
 }
@@ -242,6 +249,10 @@ export function lateralTorsionalChecks(context: CheckContext): {
   const { section, material, lateralTorsional = {} } = context.input;
   const mode = 'lateral-torsional-buckling' as const;
   if (lateralTorsional.braced) return notApplicable('the compression flange is braced continuously (lateralTorsional.braced)');
+  const weakAxisBending = largestMagnitudeOn(context.input.analysis, 'momentY', 0, context.input.model.length).value > 0;
+  if (!section.closed && section.secondMomentY > section.secondMomentZ && weakAxisBending && !(section.shape === 'rectangle' && section.width < NARROW_RECTANGLE_DEPTH_RATIO * section.depth)) {
+    return unevaluated('bending about y, the strong axis of this section: its lateral-torsional buckling is not evaluated (this check is made for bending about z); turn the section so that z is its strong axis, or brace it (lateralTorsional.braced)');
+  }
   const exclusion = lateralTorsionalExclusion(section);
   if (exclusion !== null) return notApplicable(exclusion);
   if (UNEVALUATED_SHAPES.has(section.shape)) {
@@ -252,7 +263,11 @@ export function lateralTorsionalChecks(context: CheckContext): {
   }
   const curve = curveOf(context);
   const height = lateralTorsional.loadHeight ?? DEFAULT_LOAD_HEIGHT;
+  const steel = isStructuralSteel(material);
   const pointHeight = loadPointHeight(section, context.input.dimensions, height);
+  if (Math.abs(pointHeight) > MAX_LOAD_HEIGHT_DEPTHS * section.depth) {
+    throw new EngineError('not-applicable', `The load height is ${MAX_LOAD_HEIGHT_DEPTHS} depths or more from the shear centre: a load that far off the section is not a load on this member.`, ['lateralTorsional', 'loadHeight', 'aboveShearCentre']);
+  }
   const modulus = section.sectionModulusZ;
   let worst: { length: UnbracedLength; moment: number; position: number | null; criticalMoment: number; zg: number; resistance: ReturnType<typeof lateralTorsionalResistance> } | null = null;
   for (const length of unbracedLengths(context)) {
@@ -260,11 +275,15 @@ export function lateralTorsionalChecks(context: CheckContext): {
     if (demand.value <= 0) continue;
     const loading = length.overhang ? null : transverseLoading(context, length.from, length.to);
     const tabulated = loading === null ? null : criticalMomentFactors({ kind: loading });
-    const zg = destabilisingLoadHeight(context, length.from, length.to, pointHeight);
+    const zg = destabilisingLoadHeight(context, length.from, length.to, pointHeight, lateralTorsional.loadHeight !== undefined);
     let monosymmetry = 0;
     if (section.shape === 'tee' && context.input.dimensions?.shape === 'tee') {
-      // sigma = -Mz y / Iz: a positive Mz compresses the top, where a tee's flange is.
-      const flangeInCompression = demand.position === null || fieldAt(context.input.analysis, 'momentZ', demand.position) >= 0;
+      // sigma = -Mz y / Iz: a positive Mz compresses the top, where a tee's flange is. Where the moment
+      // takes both signs along the length the stem tip is in compression somewhere, and that governs
+      // (AISC 360-16 F9, from memory).
+      const pieces = context.input.analysis.pieces.filter((piece) => piece.end > length.from && piece.start < length.to);
+      const range = extremesOfField(pieces, 'momentZ');
+      const flangeInCompression = range.min.value >= 0 && (demand.position === null || fieldAt(context.input.analysis, 'momentZ', demand.position) >= 0);
       monosymmetry = teeMonosymmetryParameter(context.input.dimensions, flangeInCompression);
     }
     const criticalMoment = generalCriticalMoment({
@@ -279,10 +298,14 @@ export function lateralTorsionalChecks(context: CheckContext): {
       monosymmetryParameter: monosymmetry,
     });
     if (!(criticalMoment > 0) || !Number.isFinite(criticalMoment)) {
-      // Loads past the range of finite arithmetic (the moment diagram overflows C1): no number to check against.
-      throw new EngineError('not-applicable', `The lateral-torsional buckling check has no positive, finite critical moment (${criticalMoment}).`, [], { mode, criticalMoment });
+      // Loads or lengths past the range of finite arithmetic (the moment diagram overflows C1): no number to check against.
+      throw new EngineError('not-applicable', 'The lateral-torsional buckling check has no positive, finite critical moment: the loads, the unbraced length or the load height are beyond what it can take.', ['lateralTorsional']);
     }
-    const resistance = lateralTorsionalResistance({ sectionModulus: modulus, yieldStrength: material.yieldStrength, criticalMoment, curve });
+    // EN 1993-1-1's curves are for steel: another material is checked against the elastic M_cr with the
+    // factor against elastic instability.
+    const resistance = steel
+      ? lateralTorsionalResistance({ sectionModulus: modulus, yieldStrength: material.yieldStrength, criticalMoment, curve })
+      : { lambdaBar: Math.sqrt((modulus * material.yieldStrength) / criticalMoment), chi: 1, resistance: criticalMoment };
     if (worst === null || demand.value / resistance.resistance > worst.moment / worst.resistance.resistance) {
       worst = { length, moment: demand.value, position: demand.position, criticalMoment, zg, resistance };
     }
@@ -303,7 +326,7 @@ export function lateralTorsionalChecks(context: CheckContext): {
       relativeSlenderness: resistance.lambdaBar,
       reductionFactor: resistance.chi,
       resistance: resistance.resistance,
-      curve,
+      ...(steel ? { curve } : {}),
       loadHeight: zg,
     },
     findings: {
@@ -313,10 +336,10 @@ export function lateralTorsionalChecks(context: CheckContext): {
           quantity: 'moment',
           demand: worst.moment,
           capacity: resistance.resistance,
-          requiredSafetyFactor: context.criteria.requiredSafetyFactor[mode],
+          requiredSafetyFactor: steel ? context.criteria.requiredSafetyFactor[mode] : context.criteria.requiredSafetyFactor.buckling,
           position: worst.position,
           location: `unbraced length ${rangeLabel(length.from, length.to)}`,
-          basis: `largest |Mz| against M_b = chi_LT W fy (EN 1993-1-1:2005 6.3.2.2, curve ${curve}, from memory), chi_LT = ${fourSignificantText(resistance.chi)} at lambda_LT = ${fourSignificantText(resistance.lambdaBar)}, from the elastic M_cr = ${fourSignificantText(worst.criticalMoment)} N*m of the three-factor formula (ENV 1993-1-1 Annex F / SN003, from memory), C1 = ${fourSignificantText(length.momentGradientFactor)} (AISC 360-16 eq. F1-1 for spans, from memory), ${heightText}`,
+          basis: steel ? `largest |Mz| against M_b = chi_LT W fy (EN 1993-1-1:2005 6.3.2.2, curve ${curve}, from memory), chi_LT = ${fourSignificantText(resistance.chi)} at lambda_LT = ${fourSignificantText(resistance.lambdaBar)}, from the elastic M_cr = ${fourSignificantText(worst.criticalMoment)} N*m of the three-factor formula (ENV 1993-1-1 Annex F / SN003, from memory), C1 = ${fourSignificantText(length.momentGradientFactor)} (AISC 360-16 eq. F1-1 for spans, from memory), ${heightText}` : `largest |Mz| against the elastic M_cr of the three-factor formula (ENV 1993-1-1 Annex F / SN003, from memory), with the factor against elastic instability: EN 1993-1-1's reduction curves are for steel; C1 = ${fourSignificantText(length.momentGradientFactor)}, ${heightText}`,
         }),
       ],
       notApplicable: [],

@@ -5,8 +5,9 @@
  * - shear: tau = R / (n A), n = 1 (single shear) or 2 (double shear), A = pi d^2 / 4, against the pin
  *   material's shear strength (average direct shear on the shear planes, Shigley 10th ed., ch. 3, from
  *   memory);
- * - bearing: sigma = R / (d t) on the projected area, against the lower compressive strength of the
- *   pin and of the member material (the plate is taken to be of the member's material);
+ * - bearing: sigma = R / (d t) on the eye and R / (n d a) on each clevis plate (in single shear the other
+ *   plate, all of R), the larger, on the projected area, against the lower compressive strength of the
+ *   pin and of the member material (the plates are taken to be of the member's material);
  * - bending: sigma = M / (pi d^3 / 32) against the pin's yield strength, with M from pin-bending.ts.
  */
 
@@ -47,16 +48,19 @@ export function pinChecks(context: CheckContext): CheckFindings {
       }),
     );
     const plateWeaker = strengths.compression.value < pinStrengths.compression.value;
+    // The eye carries R on d t; each clevis plate R / n on d a (in single shear the other plate, all of R).
+    const eyeBearing = force / (pin.diameter * pin.plateThickness);
+    const clevisBearing = force / (pin.shearPlanes * pin.diameter * pin.clevisPlateThickness);
     checks.push(
       failureCheck({
         mode: 'pin-bearing',
         quantity: 'stress',
-        demand: force / (pin.diameter * pin.plateThickness),
+        demand: Math.max(eyeBearing, clevisBearing),
         capacity: plateWeaker ? strengths.compression.value : pinStrengths.compression.value,
         requiredSafetyFactor: criteria.requiredSafetyFactor['pin-bearing'],
         position: reaction.position,
-        location: `pin at support ${pin.support}, plate ${pin.plateThickness} m thick`,
-        basis: `sigma = R / (d t) on the projected area (Shigley 10th ed., ch. 3, from memory) against the lower ${plateWeaker ? 'member' : 'pin'} ${plateWeaker ? strengths.compression.symbol : pinStrengths.compression.symbol}`,
+        location: eyeBearing >= clevisBearing ? `pin at support ${pin.support}, plate ${pin.plateThickness} m thick` : `pin at support ${pin.support}, ${pin.shearPlanes === 2 ? 'each clevis plate' : 'the other plate'} ${pin.clevisPlateThickness} m thick`,
+        basis: `sigma = R / (d t) on the eye or R / (n d a) on a clevis plate, the larger, on the projected area (Shigley 10th ed., ch. 3, from memory) against the lower ${plateWeaker ? 'member' : 'pin'} ${plateWeaker ? strengths.compression.symbol : pinStrengths.compression.symbol}`,
       }),
     );
     const bending = pinBendingMoment(pin, force);

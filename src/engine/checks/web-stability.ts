@@ -10,12 +10,13 @@
  * A channel's one-sided flange is taken through the same formulas with its width on one side.
  */
 
-import type { ChannelDimensions, ISectionDimensions } from '../sections/dimensions.js';
+import type { BoxDimensions, ChannelDimensions, ISectionDimensions } from '../sections/dimensions.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
 import type { FailureCheck, NotApplicableCheck, UncheckedMode } from './check-outcome.js';
 import { largestMagnitudeOn } from './critical-positions.js';
 import { failureCheck } from './failure-check.js';
 import { fourSignificantText } from './number-texts.js';
+import { isStructuralSteel } from './structural-steel.js';
 import { patchLoadingResistance, steelEpsilon, webShearBucklingResistance } from './web-resistance.js';
 
 type FlangedDimensions = ISectionDimensions | ChannelDimensions;
@@ -41,13 +42,55 @@ function concentratedForces(context: CheckContext): { position: number; force: n
   return forces;
 }
 
+/**
+ * A box's two walls along y are webs too. Shear buckling is checked on the pair (twice one wall's
+ * resistance, the clear depth between the flanges less the corners, 3 t in all: common practice); patch
+ * loading of a box is not evaluated, so where its walls are slender it is left unchecked.
+ */
+function boxWebChecks(context: CheckContext, box: BoxDimensions): CheckFindings {
+  const { material, model, analysis } = context.input;
+  const t = box.wallThickness;
+  const webDepth = box.depth - 3 * t;
+  const buckling = webShearBucklingResistance({ webDepth, webThickness: t, webYieldStrength: material.yieldStrength, elasticModulus: material.elasticModulus });
+  const shear = largestMagnitudeOn(analysis, 'shearY', 0, model.length);
+  const forces = concentratedForces(context);
+  const stocky = `c/t = ${fourSignificantText(buckling.webSlendernessRatio)} within 72 eps / eta = ${fourSignificantText(buckling.shearBucklingSlendernessLimit)} (EN 1993-1-5:2006 5.1(2), from memory)`;
+  const findings: { checks: FailureCheck[]; notApplicable: NotApplicableCheck[]; unchecked: UncheckedMode[] } = { checks: [], notApplicable: [], unchecked: [] };
+  if (!buckling.shearBucklingCheckRequired) findings.notApplicable.push({ mode: 'web-shear-buckling', reason: `the box's walls yield in shear before they buckle: ${stocky}` });
+  else if (shear.value > 0) {
+    findings.checks.push(
+      failureCheck({
+        mode: 'web-shear-buckling',
+        quantity: 'force',
+        demand: shear.value,
+        capacity: 2 * buckling.resistance,
+        requiredSafetyFactor: context.criteria.requiredSafetyFactor['web-shear-buckling'],
+        position: shear.position,
+        location: `the two walls of the box, c/t = ${fourSignificantText(buckling.webSlendernessRatio)}`,
+        basis: `largest |Vy| against 2 V_bw, V_bw = chi_w fyw hw t / sqrt(3) per wall with hw = h - 3t, chi_w = ${fourSignificantText(buckling.shearBucklingReductionFactor)} (EN 1993-1-5:2006 5.2-5.3, Table 5.1, non-rigid end post; from memory)`,
+      }),
+    );
+  } else findings.notApplicable.push({ mode: 'web-shear-buckling', reason: 'no shear force along y anywhere along the member' });
+  if (forces.length === 0) findings.notApplicable.push({ mode: 'patch-loading', reason: 'no concentrated force across the flange (a point load or a support reaction along y)' });
+  else if (buckling.shearBucklingCheckRequired) findings.unchecked.push({ mode: 'patch-loading', reason: `a concentrated force on a box whose walls are slender (c/t = ${fourSignificantText(buckling.webSlendernessRatio)}): the crippling of its walls is not evaluated` });
+  else findings.notApplicable.push({ mode: 'patch-loading', reason: `stocky walls: ${stocky}; their crippling under a point load is left to the connection design` });
+  return findings;
+}
+
 export function webStabilityChecks(context: CheckContext): CheckFindings {
+  const { material } = context.input;
+  const plated = context.input.dimensions?.shape === 'box' || flangedDimensions(context) !== null;
+  if (plated && !isStructuralSteel(material)) {
+    const reason = "EN 1993-1-5's web rules are for steel: the web of a member of another material is not evaluated";
+    return { checks: [], notApplicable: [], unchecked: [{ mode: 'web-shear-buckling', reason }, { mode: 'patch-loading', reason }] };
+  }
+  if (context.input.dimensions?.shape === 'box') return boxWebChecks(context, context.input.dimensions);
   const dimensions = flangedDimensions(context);
   if (dimensions === null) {
-    const reason = 'not an I-section or channel with a known web';
+    const reason = 'not an I-section, channel or box with a known web';
     return { checks: [], notApplicable: [{ mode: 'web-shear-buckling', reason }, { mode: 'patch-loading', reason }] };
   }
-  const { material, model, analysis } = context.input;
+  const { model, analysis } = context.input;
   const required = context.criteria.requiredSafetyFactor;
   const webDepth = dimensions.depth - 2 * dimensions.flangeThickness;
   const web = { webDepth, webThickness: dimensions.webThickness, webYieldStrength: material.yieldStrength, elasticModulus: material.elasticModulus };

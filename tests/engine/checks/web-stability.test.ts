@@ -115,7 +115,7 @@ describe('sections the web checks do not cover', () => {
     const findings = findingsOf(input);
     expect(findings.checks).toEqual([]);
     expect(findings.notApplicable.map((n) => n.mode)).toEqual(['web-shear-buckling', 'patch-loading']);
-    for (const entry of findings.notApplicable) expect(entry.reason).toBe('not an I-section or channel with a known web');
+    for (const entry of findings.notApplicable) expect(entry.reason).toBe('not an I-section, channel or box with a known web');
     // The same through checkMember: neither mode is checked or left unchecked.
     const outcome = checkMember(input);
     expect(outcome.checks.filter((c) => c.mode === 'web-shear-buckling' || c.mode === 'patch-loading')).toEqual([]);

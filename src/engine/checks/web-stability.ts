@@ -17,7 +17,7 @@ import { largestMagnitudeOn } from './critical-positions.js';
 import { failureCheck } from './failure-check.js';
 import { fourSignificantText } from './number-texts.js';
 import { isStructuralSteel } from './structural-steel.js';
-import { patchLoadingResistance, steelEpsilon, webShearBucklingResistance } from './web-resistance.js';
+import { patchLoadingResistance, steelEpsilon, webShearBucklingResistance, type PatchLoadingResult, type WebShearBucklingResult } from './web-resistance.js';
 
 type FlangedDimensions = ISectionDimensions | ChannelDimensions;
 
@@ -77,6 +77,51 @@ function boxWebChecks(context: CheckContext, box: BoxDimensions): CheckFindings 
   return findings;
 }
 
+interface WebResistances {
+  readonly buckling: WebShearBucklingResult;
+  /** Why the web need not be checked for shear buckling, made once. */
+  readonly stockyReason: string;
+  readonly patchInSpan: (flangeWidth: number) => PatchLoadingResult;
+  readonly patchAtEnd: (flangeWidth: number) => PatchLoadingResult;
+}
+
+/**
+ * The resistances depend only on the plates and the material, not on the loads (no stiff bearing
+ * length is taken): a sizing checks the same catalogue sections again and again, so they are kept per
+ * dimensions object and material, a few each.
+ */
+const resistancesByDimensions = new WeakMap<FlangedDimensions, Map<string, WebResistances>>();
+
+function webResistancesOf(dimensions: FlangedDimensions, web: { webDepth: number; webThickness: number; webYieldStrength: number; elasticModulus: number }): WebResistances {
+  const key = `${web.webYieldStrength}|${web.elasticModulus}`;
+  let known = resistancesByDimensions.get(dimensions);
+  const found = known?.get(key);
+  if (found !== undefined) return found;
+  const buckling = webShearBucklingResistance({ ...web, flangeWidth: dimensions.flangeWidth, flangeThickness: dimensions.flangeThickness });
+  const patch = (loadType: 'type-a' | 'type-c') => {
+    let last: { width: number; result: PatchLoadingResult } | undefined;
+    return (flangeWidth: number) => {
+      if (last?.width === flangeWidth) return last.result;
+      const common = { ...web, flangeWidth, flangeThickness: dimensions.flangeThickness, stiffBearingLength: 0 };
+      const result = patchLoadingResistance(loadType === 'type-c' ? { ...common, loadType, endDistance: 0 } : { ...common, loadType });
+      last = { width: flangeWidth, result };
+      return result;
+    };
+  };
+  const made: WebResistances = {
+    buckling,
+    stockyReason: `hw / tw = ${fourSignificantText(buckling.webSlendernessRatio)} is within 72 eps / eta = ${fourSignificantText(buckling.shearBucklingSlendernessLimit)}: the web yields in shear before it buckles (EN 1993-1-5:2006 5.1(2), from memory)`,
+    patchInSpan: patch('type-a'),
+    patchAtEnd: patch('type-c'),
+  };
+  if (known === undefined) {
+    known = new Map();
+    resistancesByDimensions.set(dimensions, known);
+  }
+  if (known.size < 8) known.set(key, made);
+  return made;
+}
+
 export function webStabilityChecks(context: CheckContext): CheckFindings {
   const { material } = context.input;
   const plated = context.input.dimensions?.shape === 'box' || flangedDimensions(context) !== null;
@@ -99,12 +144,10 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
   const unchecked: UncheckedMode[] = [];
 
   const shear = largestMagnitudeOn(analysis, 'shearY', 0, model.length);
-  const buckling = webShearBucklingResistance({ ...web, flangeWidth: dimensions.flangeWidth, flangeThickness: dimensions.flangeThickness });
+  const resistances = webResistancesOf(dimensions, web);
+  const { buckling } = resistances;
   if (!buckling.shearBucklingCheckRequired) {
-    notApplicable.push({
-      mode: 'web-shear-buckling',
-      reason: `hw / tw = ${fourSignificantText(buckling.webSlendernessRatio)} is within 72 eps / eta = ${fourSignificantText(buckling.shearBucklingSlendernessLimit)}: the web yields in shear before it buckles (EN 1993-1-5:2006 5.1(2), from memory)`,
-    });
+    notApplicable.push({ mode: 'web-shear-buckling', reason: resistances.stockyReason });
   } else if (!buckling.inRange) {
     unchecked.push({ mode: 'web-shear-buckling', reason: `the web is outside the range of EN 1993-1-5's method: ${buckling.outOfRangeReasons.join('; ')}` });
   } else if (shear.value > 0) {
@@ -134,13 +177,7 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
   let worst: FailureCheck | null = null;
   for (const { position, force, what } of forces) {
     const atEnd = position <= END_TOLERANCE * model.length || position >= model.length * (1 - END_TOLERANCE);
-    const patch = patchLoadingResistance({
-      ...web,
-      flangeWidth: bearingFlangeWidth,
-      flangeThickness: dimensions.flangeThickness,
-      stiffBearingLength: 0,
-      ...(atEnd ? { loadType: 'type-c' as const, endDistance: 0 } : { loadType: 'type-a' as const }),
-    });
+    const patch = atEnd ? resistances.patchAtEnd(bearingFlangeWidth) : resistances.patchInSpan(bearingFlangeWidth);
     if (!patch.inRange) {
       unchecked.push({ mode: 'patch-loading', reason: `${what}: outside the range of EN 1993-1-5 clause 6: ${patch.outOfRangeReasons.join('; ')}` });
       continue;

@@ -1482,8 +1482,10 @@ export interface components {
             movingLoads?: components["schemas"]["MovingLoad"][];
             /** @description 1 to 100 combinations. Default: built from the categories (common practice in the allowable-stress format, a placeholder for the governing code; see the README). The answer says which set was used. Over all combinations at most 10000 load states (train positions searched, 1 for a combination without a moving load): beyond, a 422. */
             combinations?: components["schemas"]["Combination"][];
-            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false. */
+            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default true for catalogue and shape sections, false for custom sections (which may describe only part of a member); a notice says which either way. */
             selfWeight?: boolean;
+            /** @description The loads along y act through the shear centre (a channel loaded through a cleat at its shear centre, or held against twist along its length). Default false: a channel loaded in the plane of its web is twisted by the load times the distance to its shear centre, which this service does not add, so torsion is listed as unchecked until this is stated or the torque is given as loads. */
+            loadsThroughShearCentre?: boolean;
             criteria?: components["schemas"]["Criteria"];
             buckling?: components["schemas"]["BucklingOptions"];
             lateralTorsional?: components["schemas"]["LateralTorsionalOptions"];
@@ -2348,8 +2350,10 @@ export interface components {
             movingLoads?: components["schemas"]["MovingLoad"][];
             /** @description 1 to 100 combinations. Default: built from the categories (common practice in the allowable-stress format, a placeholder for the governing code; see the README). The answer says which set was used. Over all combinations at most 10000 load states (train positions searched, 1 for a combination without a moving load): beyond, a 422. */
             combinations?: components["schemas"]["Combination"][];
-            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false. */
+            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default true for catalogue and shape sections, false for custom sections (which may describe only part of a member); a notice says which either way. */
             selfWeight?: boolean;
+            /** @description The loads along y act through the shear centre (a channel loaded through a cleat at its shear centre, or held against twist along its length). Default false: a channel loaded in the plane of its web is twisted by the load times the distance to its shear centre, which this service does not add, so torsion is listed as unchecked until this is stated or the torque is given as loads. */
+            loadsThroughShearCentre?: boolean;
             criteria?: components["schemas"]["Criteria"];
             buckling?: components["schemas"]["BucklingOptions"];
             lateralTorsional?: components["schemas"]["LateralTorsionalOptions"];
@@ -2464,8 +2468,10 @@ export interface components {
             movingLoads?: components["schemas"]["MovingLoad"][];
             /** @description 1 to 100 combinations. Default: built from the categories (common practice in the allowable-stress format, a placeholder for the governing code; see the README). The answer says which set was used. Over all combinations at most 10000 load states (train positions searched, 1 for a combination without a moving load): beyond, a 422. */
             combinations?: components["schemas"]["Combination"][];
-            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false. */
+            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default true for catalogue and shape sections, false for custom sections (which may describe only part of a member); a notice says which either way. */
             selfWeight?: boolean;
+            /** @description The loads along y act through the shear centre (a channel loaded through a cleat at its shear centre, or held against twist along its length). Default false: a channel loaded in the plane of its web is twisted by the load times the distance to its shear centre, which this service does not add, so torsion is listed as unchecked until this is stated or the torque is given as loads. */
+            loadsThroughShearCentre?: boolean;
             criteria?: components["schemas"]["Criteria"];
             buckling?: components["schemas"]["BucklingOptions"];
             lateralTorsional?: components["schemas"]["LateralTorsionalOptions"];
@@ -2578,8 +2584,10 @@ export interface components {
             movingLoads?: components["schemas"]["MovingLoad"][];
             /** @description 1 to 100 combinations. Default: built from the categories (common practice in the allowable-stress format, a placeholder for the governing code; see the README). The answer says which set was used. Over all combinations at most 10000 load states (train positions searched, 1 for a combination without a moving load): beyond, a 422. */
             combinations?: components["schemas"]["Combination"][];
-            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false. */
+            /** @description Add the member's own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default true for catalogue and shape sections, false for custom sections (which may describe only part of a member); a notice says which either way. */
             selfWeight?: boolean;
+            /** @description The loads along y act through the shear centre (a channel loaded through a cleat at its shear centre, or held against twist along its length). Default false: a channel loaded in the plane of its web is twisted by the load times the distance to its shear centre, which this service does not add, so torsion is listed as unchecked until this is stated or the torque is given as loads. */
+            loadsThroughShearCentre?: boolean;
             criteria?: components["schemas"]["Criteria"];
             buckling?: components["schemas"]["BucklingOptions"];
             lateralTorsional?: components["schemas"]["LateralTorsionalOptions"];

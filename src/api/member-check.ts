@@ -62,6 +62,8 @@ export interface NormalisedCheck {
   readonly buckling: BucklingInput;
   readonly lateralTorsional: LateralTorsionalInput;
   readonly pins: readonly PinInput[];
+  /** The request states that its loads along y act through the shear centre. */
+  readonly loadsThroughShearCentre: boolean;
   /** Load cases, moving loads and combinations; null for one load state given in `loads`. */
   readonly combinations: NormalisedCombinations | null;
   readonly base: Path;
@@ -112,6 +114,7 @@ export function normaliseCheck(
     buckling,
     lateralTorsional,
     pins,
+    loadsThroughShearCentre: request.loadsThroughShearCentre ?? false,
     combinations,
     base,
   };
@@ -159,6 +162,7 @@ export function checkWithSection(check: NormalisedCheck, section: ResolvedSectio
     buckling: check.buckling,
     lateralTorsional: check.lateralTorsional,
     pins: check.pins,
+    loadsThroughShearCentre: check.loadsThroughShearCentre,
   };
   try {
     if (check.combinations !== null) return checkCombinationsWithSection(check, check.combinations, section, material, model, checks);

@@ -45,6 +45,7 @@ function checkForm(check: NormalisedCheck) {
     buckling: check.buckling,
     lateralTorsional: check.lateralTorsional,
     pins: check.pins,
+    loadsThroughShearCentre: check.loadsThroughShearCentre ? true : undefined,
     // Defaults are left out, as everywhere in the form: a request that names them has the default's digest.
     output: { samples: check.samples, units: check.units.names, detail: check.detail === 'summary' ? 'summary' : undefined, significantDigits: check.units.significantDigits },
   };

@@ -85,7 +85,14 @@ export const memberCheckFields = {
   selfWeight: z
     .boolean()
     .optional()
-    .openapi({ description: 'Add the member\'s own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default false.' }),
+    .openapi({ description: 'Add the member\'s own weight, density x area x g (g = 9.80665 m/s^2) downward (-y) over its whole length. Default true for catalogue and shape sections, false for custom sections (which may describe only part of a member); a notice says which either way.' }),
+  loadsThroughShearCentre: z
+    .boolean()
+    .optional()
+    .openapi({
+      description:
+        'The loads along y act through the shear centre (a channel loaded through a cleat at its shear centre, or held against twist along its length). Default false: a channel loaded in the plane of its web is twisted by the load times the distance to its shear centre, which this service does not add, so torsion is listed as unchecked until this is stated or the torque is given as loads.',
+    }),
   criteria: criteriaInput.optional(),
   buckling: bucklingInput.optional(),
   lateralTorsional: lateralTorsionalInput.optional(),

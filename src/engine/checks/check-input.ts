@@ -80,4 +80,6 @@ export interface MemberCheckInput {
   readonly buckling?: BucklingInput;
   readonly lateralTorsional?: LateralTorsionalInput;
   readonly pins?: readonly PinInput[];
+  /** The loads along y act through the shear centre (stated by the caller); otherwise a channel's are taken through its web. */
+  readonly loadsThroughShearCentre?: boolean;
 }

@@ -4,7 +4,10 @@
  * answer "pass" for a member it has not checked in every way it can fail.
  */
 
+import { channelShearCentreDistance } from '../sections/shear-centre.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
+import type { NotApplicableCheck, UncheckedMode } from './check-outcome.js';
+import { largestMagnitudeOn } from './critical-positions.js';
 
 /**
  * Rotating members: a support that holds the member in place but lets it turn (a bearing), on a member
@@ -18,16 +21,32 @@ function isShaft(context: CheckContext): boolean {
   return bearing && (context.peaks.torsionalShear.value > 0 || turnsFreely);
 }
 
-export function unevaluatedModes(context: CheckContext): CheckFindings {
-  if (!isShaft(context)) return { checks: [], notApplicable: [{ mode: 'fatigue', reason: 'no support lets the member turn: not a rotating shaft (fatigue under repeated loads is for the governing code to judge)' }] };
+/**
+ * A channel loaded in the plane of its web: its shear centre lies e off the web (Roark / AISC Design
+ * Guide 9, from memory), so the load twists it by q e, a torque the model does not hold unless the caller
+ * gives it or states that the loads act through the shear centre.
+ */
+function eccentricChannelLoad(context: CheckContext): UncheckedMode | null {
+  const { section, dimensions, loadsThroughShearCentre, analysis, model } = context.input;
+  if (section.shape !== 'channel' || loadsThroughShearCentre === true) return null;
+  if (!(largestMagnitudeOn(analysis, 'shearY', 0, model.length).value > 0)) return null;
+  const offset = dimensions?.shape === 'channel' ? ` ${Number((channelShearCentreDistance(dimensions) * 1000).toPrecision(3))} mm` : '';
   return {
-    checks: [],
-    notApplicable: [],
-    unchecked: [
-      {
-        mode: 'fatigue',
-        reason: 'a shaft that turns in its bearings reverses its bending stress every revolution: its endurance (fatigue, with the stress concentrations of its keyways and shoulders) must be checked, which this service does not do',
-      },
-    ],
+    mode: 'torsion',
+    reason: `a channel loaded in the plane of its web is twisted by the load times the distance${offset} from its web to its shear centre, a torque not in this model: give that torque as loads (mx) and state loadsThroughShearCentre: true, or state it because the loads do act through the shear centre`,
   };
+}
+
+export function unevaluatedModes(context: CheckContext): CheckFindings {
+  const notApplicable: NotApplicableCheck[] = [];
+  const unchecked: UncheckedMode[] = [];
+  if (isShaft(context)) {
+    unchecked.push({
+      mode: 'fatigue',
+      reason: 'a shaft that turns in its bearings reverses its bending stress every revolution: its endurance (fatigue, with the stress concentrations of its keyways and shoulders) must be checked, which this service does not do',
+    });
+  } else notApplicable.push({ mode: 'fatigue', reason: 'no support lets the member turn: not a rotating shaft (fatigue under repeated loads is for the governing code to judge)' });
+  const eccentric = eccentricChannelLoad(context);
+  if (eccentric !== null) unchecked.push(eccentric);
+  return { checks: [], notApplicable, unchecked };
 }

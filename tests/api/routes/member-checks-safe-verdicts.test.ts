@@ -120,3 +120,26 @@ describe('members that must not pass', () => {
     expect(response.body.errors.map((error: { pointer: string }) => error.pointer)).toContain('/lateralTorsional/loadHeight/aboveShearCentre');
   });
 });
+
+describe('a channel loaded in the plane of its web', () => {
+  // 200 x 75 x 8.5 / 11.5 channel, 3 m, 8 kN/m: its shear centre lies e = 3 b'^2 tf / (6 b' tf + h' tw) from the
+  // web mid-line, b' = 70.75 mm, h' = 188.5 mm: e = 3 x 70.75^2 x 11.5 / (6 x 70.75 x 11.5 + 188.5 x 8.5) = 172692 / 6484 = 26.6 mm
+  // (Roark's Formulas for Stress and Strain / AISC Design Guide 9, App. A, from memory), so the load twists it by about 8000 x 0.0266 = 213 N*m/m.
+  const channel = { shape: 'channel', depth: 0.2, flangeWidth: 0.075, webThickness: 0.0085, flangeThickness: 0.0115, rootRadius: 0 };
+  const body = (extra: object = {}) => ({ selfWeight: false, member: simpleSpan(3), section: channel, material: { grade: 'S355' }, loads: [{ type: 'distributed', from: 0, to: 3, qy: -8000 }], ...extra });
+
+  it('leaves torsion unchecked, naming the distance to the shear centre, unless the loads are stated to act through it', async () => {
+    const response = await post(body());
+    const gap = (response.body.unchecked as { mode: string; reason: string }[]).find((entry) => entry.mode === 'torsion');
+    expect(gap?.reason).toContain('26.6 mm');
+    expect(response.body.verdict).toBe('not-verified');
+    const stated = await post(body({ loadsThroughShearCentre: true }));
+    expect(modes(stated.body.unchecked)).not.toContain('torsion');
+  });
+
+  it('fails in twist once the torque of the eccentric load is given', async () => {
+    const response = await post(body({ loadsThroughShearCentre: true, loads: [{ type: 'distributed', from: 0, to: 3, qy: -8000, mx: 212 }] }));
+    expect(response.body.verdict).toBe('fail');
+    expect(response.body.checks.find((entry: { mode: string }) => entry.mode === 'twist').passes).toBe(false);
+  });
+});

@@ -208,6 +208,18 @@ describe('memberFigureSvg', () => {
     expect(texts(before)).toEqual(['Simple span', 'Elevation: x along the member, +y up', 'A', 'B', 'P: Fy = -6 kN', 'L = 3.6 m']);
   });
 
+  it('draws a shaft bearing as a block with a circle and a torsion restraint as a crossed box', () => {
+    const shaft = { ...simpleSpan(), supports: [{ position: 0, kind: 'bearing' as const }, { position: L, kind: 'torsion-restraint' as const }] };
+    const before = (svg: string) => svg.slice(0, svg.indexOf('<g class="panel"'));
+    const drawn = before(memberFigureSvg(shaft));
+    const plain = before(memberFigureSvg(simpleSpan()));
+    // The bearing: one rect and one circle more than a pinned support draws; the restraint: a rect crossed by two lines.
+    expect((drawn.match(/<rect /g) ?? []).length - (plain.match(/<rect /g) ?? []).length).toBe(2);
+    // The roller's two wheels go, the bearing's one circle comes.
+    expect((drawn.match(/<circle /g) ?? []).length).toBe((plain.match(/<circle /g) ?? []).length - 2 + 1);
+    expect(wellFormedProblems(memberFigureSvg(shaft))).toEqual([]);
+  });
+
   it('adds the plan view only when something acts along z', () => {
     const input = simpleSpan();
     expect(memberFigureSvg(input)).not.toContain('Plan, seen from above');

@@ -1518,6 +1518,11 @@ export interface components {
             /** @description A name echoed with the reaction. */
             label?: string;
             pin?: components["schemas"]["Pin"];
+            /**
+             * @description Length of the seat or plate the member bears on here: the stiff bearing length of the patch-loading check (EN 1993-1-5 6.3). Default 0, the safe side. A number in m, or a string with a unit, e.g. "250 mm".
+             * @example 250 mm
+             */
+            bearingLength?: number | string;
         };
         /** @description The pin of a support's connection, checked in shear, bearing and bending under the support's resultant reaction. */
         Pin: {
@@ -1654,6 +1659,11 @@ export interface components {
             /** @description A name echoed with the reaction. */
             label?: string;
             pin?: components["schemas"]["Pin"];
+            /**
+             * @description Length of the seat or plate the member bears on here: the stiff bearing length of the patch-loading check (EN 1993-1-5 6.3). Default 0, the safe side. A number in m, or a string with a unit, e.g. "250 mm".
+             * @example 250 mm
+             */
+            bearingLength?: number | string;
         };
         /** @description An internal hinge: a release of both bending moments (axial force and torque pass through). */
         Hinge: {
@@ -2006,6 +2016,11 @@ export interface components {
              */
             mz?: number | string;
             label?: string;
+            /**
+             * @description Length along the member over which the load bears on the flange (a wheel contact, a bearing plate): the stiff bearing length of the patch-loading check (EN 1993-1-5 6.3). Default 0, the safe side. A number in m, or a string with a unit, e.g. "250 mm".
+             * @example 250 mm
+             */
+            bearingLength?: number | string;
         };
         /** @description A load spread over [from, to], uniform or linearly varying. */
         DistributedLoad: {

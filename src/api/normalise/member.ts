@@ -29,12 +29,21 @@ export function normaliseMember(member: MemberInput, reader: QuantityReader, bas
   return { length, supports, hinges };
 }
 
+/** A stiff bearing length: a length, zero or more; absent when not given. */
+function bearingLengthOf(given: QuantityInput | undefined, reader: QuantityReader, path: Path): { bearingLength?: number } {
+  if (given === undefined) return {};
+  const value = reader.read(given, 'length', path);
+  if (Number.isFinite(value) && value < 0) reader.fail(path, 'a bearing length cannot be negative');
+  return { bearingLength: value };
+}
+
 function normaliseSupport(support: SupportInput, reader: QuantityReader, path: Path): SupportModel {
   const position = reader.read(support.position, 'length', [...path, 'position']);
   const restraints = Object.fromEntries(DIRECTIONS.map((d) => [d, 'free'])) as Record<Direction, Restraint>;
+  const bearing = bearingLengthOf(support.bearingLength, reader, [...path, 'bearingLength']);
   if (support.type !== 'general') {
     for (const d of PRESET_RESTRAINED[support.type]) restraints[d] = 'rigid';
-    return { position, restraints };
+    return { position, restraints, ...bearing };
   }
   for (const d of support.restrained) restraints[d] = 'rigid';
   for (const [d, stiffness] of Object.entries(support.springs ?? {}) as [Direction, QuantityInput | undefined][]) {
@@ -49,7 +58,7 @@ function normaliseSupport(support: SupportInput, reader: QuantityReader, path: P
     if (Number.isFinite(value) && !(value > 0)) reader.fail(springPath, 'a spring stiffness must be greater than zero');
     restraints[d] = { spring: value };
   }
-  return { position, restraints };
+  return { position, restraints, ...bearing };
 }
 
 export function normaliseLoads(loads: readonly LoadInput[], reader: QuantityReader, base: Path): LoadModel[] {
@@ -69,6 +78,7 @@ function normaliseLoad(load: LoadInput, reader: QuantityReader, path: Path): Loa
       mx: moment(load.mx, 'mx'),
       my: moment(load.my, 'my'),
       mz: moment(load.mz, 'mz'),
+      ...bearingLengthOf(load.bearingLength, reader, [...path, 'bearingLength']),
     };
   }
   const intensity = (

@@ -34,6 +34,7 @@ const presetSupport = z
     }),
     label: z.string().max(64).optional().openapi({ description: 'A name echoed with the reaction.' }),
     pin: pinInput.optional(),
+    bearingLength: quantity('length', 'Length of the seat or plate the member bears on here: the stiff bearing length of the patch-loading check (EN 1993-1-5 6.3). Default 0, the safe side.').optional(),
   })
   .openapi('PresetSupport');
 
@@ -45,6 +46,7 @@ const generalSupport = z
     springs: springs.optional(),
     label: z.string().max(64).optional().openapi({ description: 'A name echoed with the reaction.' }),
     pin: pinInput.optional(),
+    bearingLength: quantity('length', 'Length of the seat or plate the member bears on here: the stiff bearing length of the patch-loading check (EN 1993-1-5 6.3). Default 0, the safe side.').optional(),
   })
   .openapi('GeneralSupport', { description: 'A support that names what it restrains, with optional springs.' });
 
@@ -87,6 +89,7 @@ const pointLoad = z
     my: moment('y', 'Moment'),
     mz: moment('z', 'Moment'),
     label: z.string().max(64).optional(),
+    bearingLength: quantity('length', 'Length along the member over which the load bears on the flange (a wheel contact, a bearing plate): the stiff bearing length of the patch-loading check (EN 1993-1-5 6.3). Default 0, the safe side.').optional(),
   })
   .openapi('PointLoad', { description: 'Concentrated forces and moments at one position; any subset.' });
 

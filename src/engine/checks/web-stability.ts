@@ -5,8 +5,8 @@
  * imperfections, without partial factors: the service's own required safety factor applies.
  *
  * Assumptions (each on the safe side): no intermediate transverse stiffeners, a non-rigid end post, no
- * flange contribution to the shear resistance, and no stiff bearing length (ss = 0) under a load or at a
- * support. A force at a member end is type (c) with the load at the very end (c = 0), elsewhere type (a).
+ * flange contribution to the shear resistance, and the stiff bearing length the request gives for each
+ * support and point load (bearingLength), none (ss = 0) when it gives none. A force at a member end is type (c) with the load at the very end (c = 0), elsewhere type (a).
  * A channel's one-sided flange is taken through the same formulas with its width on one side.
  */
 
@@ -29,15 +29,15 @@ function flangedDimensions(context: CheckContext): FlangedDimensions | null {
   return dimensions !== undefined && (dimensions.shape === 'i-section' || dimensions.shape === 'channel') ? dimensions : null;
 }
 
-/** The concentrated forces across the flange (along y): point loads and support reactions, where they act. */
-function concentratedForces(context: CheckContext): { position: number; force: number; what: string }[] {
+/** The concentrated forces across the flange (along y): point loads and support reactions, where they act, with their stiff bearing lengths. */
+function concentratedForces(context: CheckContext): { position: number; force: number; bearingLength: number; what: string }[] {
   const { model, analysis } = context.input;
-  const forces: { position: number; force: number; what: string }[] = [];
+  const forces: { position: number; force: number; bearingLength: number; what: string }[] = [];
   model.loads.forEach((load, i) => {
-    if (load.kind === 'point' && load.fy !== 0) forces.push({ position: load.position, force: Math.abs(load.fy), what: `load ${i + 1}` });
+    if (load.kind === 'point' && load.fy !== 0) forces.push({ position: load.position, force: Math.abs(load.fy), bearingLength: load.bearingLength ?? 0, what: `load ${i + 1}` });
   });
   analysis.reactions.forEach((reaction, i) => {
-    if (reaction.fy !== 0) forces.push({ position: reaction.position, force: Math.abs(reaction.fy), what: `support ${i}` });
+    if (reaction.fy !== 0) forces.push({ position: reaction.position, force: Math.abs(reaction.fy), bearingLength: model.supports[i]?.bearingLength ?? 0, what: `support ${i}` });
   });
   return forces;
 }
@@ -81,8 +81,8 @@ interface WebResistances {
   readonly buckling: WebShearBucklingResult;
   /** Why the web need not be checked for shear buckling, made once. */
   readonly stockyReason: string;
-  readonly patchInSpan: (flangeWidth: number) => PatchLoadingResult;
-  readonly patchAtEnd: (flangeWidth: number) => PatchLoadingResult;
+  readonly patchInSpan: (flangeWidth: number, stiffBearingLength: number) => PatchLoadingResult;
+  readonly patchAtEnd: (flangeWidth: number, stiffBearingLength: number) => PatchLoadingResult;
 }
 
 /**
@@ -99,12 +99,12 @@ function webResistancesOf(dimensions: FlangedDimensions, web: { webDepth: number
   if (found !== undefined) return found;
   const buckling = webShearBucklingResistance({ ...web, flangeWidth: dimensions.flangeWidth, flangeThickness: dimensions.flangeThickness });
   const patch = (loadType: 'type-a' | 'type-c') => {
-    let last: { width: number; result: PatchLoadingResult } | undefined;
-    return (flangeWidth: number) => {
-      if (last?.width === flangeWidth) return last.result;
-      const common = { ...web, flangeWidth, flangeThickness: dimensions.flangeThickness, stiffBearingLength: 0 };
+    let last: { width: number; bearing: number; result: PatchLoadingResult } | undefined;
+    return (flangeWidth: number, stiffBearingLength: number) => {
+      if (last?.width === flangeWidth && last.bearing === stiffBearingLength) return last.result;
+      const common = { ...web, flangeWidth, flangeThickness: dimensions.flangeThickness, stiffBearingLength };
       const result = patchLoadingResistance(loadType === 'type-c' ? { ...common, loadType, endDistance: 0 } : { ...common, loadType });
-      last = { width: flangeWidth, result };
+      last = { width: flangeWidth, bearing: stiffBearingLength, result };
       return result;
     };
   };
@@ -175,9 +175,9 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
     return { checks, notApplicable, unchecked };
   }
   let worst: FailureCheck | null = null;
-  for (const { position, force, what } of forces) {
+  for (const { position, force, bearingLength, what } of forces) {
     const atEnd = position <= END_TOLERANCE * model.length || position >= model.length * (1 - END_TOLERANCE);
-    const patch = atEnd ? resistances.patchAtEnd(bearingFlangeWidth) : resistances.patchInSpan(bearingFlangeWidth);
+    const patch = atEnd ? resistances.patchAtEnd(bearingFlangeWidth, bearingLength) : resistances.patchInSpan(bearingFlangeWidth, bearingLength);
     if (!patch.inRange) {
       unchecked.push({ mode: 'patch-loading', reason: `${what}: outside the range of EN 1993-1-5 clause 6: ${patch.outOfRangeReasons.join('; ')}` });
       continue;
@@ -190,7 +190,7 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
       requiredSafetyFactor: required['patch-loading'],
       position,
       location: `web under ${what}${atEnd ? ' at the member end' : ''}`,
-      basis: `F_R = fyw L_eff tw, L_eff = chi_F l_y, k_F = ${fourSignificantText(patch.bucklingCoefficient)} (EN 1993-1-5:2006 clause 6, load type ${atEnd ? '(c), c = 0' : '(a)'}, no stiff bearing length, no stiffeners; from memory)`,
+      basis: `F_R = fyw L_eff tw, L_eff = chi_F l_y, k_F = ${fourSignificantText(patch.bucklingCoefficient)} (EN 1993-1-5:2006 clause 6, load type ${atEnd ? '(c), c = 0' : '(a)'}, stiff bearing length ${fourSignificantText(bearingLength)} m, no stiffeners; from memory)`,
     });
     if (worst === null || check.utilization > worst.utilization) worst = check;
   }

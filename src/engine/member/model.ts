@@ -17,6 +17,8 @@ export interface SupportModel {
   /** Position along the member, m, in [0, length]. */
   readonly position: number;
   readonly restraints: Readonly<Record<Direction, Restraint>>;
+  /** Length of the seat the member bears on (the stiff bearing length of the web checks), m; 0 when not given. */
+  readonly bearingLength?: number;
 }
 
 /** A moment release in both bending planes (torque and axial force are carried through). */
@@ -34,6 +36,8 @@ export interface PointLoadModel {
   readonly mx: number;
   readonly my: number;
   readonly mz: number;
+  /** Length along the member over which the load bears on the flange (stiff bearing length), m; 0 when not given. */
+  readonly bearingLength?: number;
 }
 
 /** Intensity at `from` and at `to`; varies linearly between. */

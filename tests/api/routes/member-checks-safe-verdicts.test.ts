@@ -143,3 +143,35 @@ describe('a channel loaded in the plane of its web', () => {
     expect(response.body.checks.find((entry: { mode: string }) => entry.mode === 'twist').passes).toBe(false);
   });
 });
+
+describe('the stiff bearing length of a support in the patch-loading check', () => {
+  // IPE 200 (hw = 200 - 2 x 8.5 = 183 mm, tw 5.6, bf 100, tf 8.5 mm), S355, 1 m span, 120 kN/m: 60 kN at each
+  // end, load type (c) with c = 0 (EN 1993-1-5:2006 clause 6, from memory), worked out apart from the engine:
+  // - ss = 0: k_F = 2, F_cr = 0.9 k_F E tw^3 / hw = 362.6 kN, l_e = 0, m1 = 17.86, m2 = 0 (lambda_F = 0.373 <= 0.5),
+  //   l_y = tf sqrt(m1 / 2) = 25.40 mm, chi_F = 1: F_R = fy l_y tw = 50.49 kN;
+  // - ss = 100 mm: k_F = 2 + 6 x 0.1 / 0.183 = 5.279, l_e = min(k_F E tw^2 / (2 fy hw), ss + c) = 0.1 m,
+  //   m2 = 0.02 (hw / tf)^2 = 9.270 (lambda_F = 0.547 > 0.5), l_y = 144.27 mm, chi_F = 0.5 / 0.547: F_R = 262.0 kN.
+  const beam = (bearingLength?: string) => ({
+    selfWeight: false,
+    member: { length: 1, supports: [{ position: 0, type: 'pinned', ...(bearingLength ? { bearingLength } : {}) }, { position: 1, type: 'roller', ...(bearingLength ? { bearingLength } : {}) }] },
+    section: { designation: 'IPE 200' },
+    material: { grade: 'S355' },
+    loads: [{ type: 'distributed', from: 0, to: 1, qy: -120000 }],
+  });
+  const patchOf = (body: { checks: { mode: string; capacity: number; passes: boolean }[] }) => body.checks.find((check) => check.mode === 'patch-loading');
+
+  it('takes none by default, and the seat given', async () => {
+    const bare = patchOf((await post(beam())).body);
+    expect(bare?.capacity).toBeCloseTo(50492.43, 0);
+    expect(bare?.passes).toBe(false);
+    const seated = patchOf((await post(beam('100 mm'))).body);
+    expect(seated?.capacity).toBeCloseTo(262010.54, 0);
+    expect(seated?.passes).toBe(true);
+  });
+
+  it('refuses a negative bearing length with its pointer', async () => {
+    const response = await post(beam('-5 mm'));
+    expect(response.status).toBe(400);
+    expect(response.body.errors.map((error: { pointer: string }) => error.pointer)).toContain('/member/supports/0/bearingLength');
+  });
+});

@@ -26,7 +26,7 @@ import { shearChecks } from './shear.js';
 import { torsionChecks } from './torsion.js';
 import { twistChecks } from './twist.js';
 import { unevaluatedModes } from './unevaluated-modes.js';
-import { openSectionStabilityChecks } from './flexural-torsional-check.js';
+import { flexuralTorsionalChecks, localBucklingChecks } from './flexural-torsional-check.js';
 import { warpingStressChecks } from './warping-stresses.js';
 import { webStabilityChecks } from './web-stability.js';
 import { verdictOf } from './verdict.js';
@@ -72,7 +72,8 @@ export function checkMember(input: MemberCheckInput): MemberCheckOutcome {
     pinChecks(context),
     webStabilityChecks(context),
     warpingStressChecks(context),
-    openSectionStabilityChecks(context),
+    flexuralTorsionalChecks(context),
+    localBucklingChecks(context),
     unevaluatedModes(context),
   ];
   const checks: FailureCheck[] = [];

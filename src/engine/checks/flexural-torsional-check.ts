@@ -10,7 +10,7 @@
 
 import { shearCentreOf } from '../sections/shear-centre.js';
 import type { CheckContext, CheckFindings } from './check-context.js';
-import type { FailureCheck, NotApplicableCheck, UncheckedMode } from './check-outcome.js';
+import type { UncheckedMode } from './check-outcome.js';
 import { failureCheck } from './failure-check.js';
 import { columnCapacities, columnFlexuralTorsionalBuckling } from './flexural-torsional-buckling.js';
 import { fourSignificantText } from './number-texts.js';
@@ -22,7 +22,7 @@ const OFF_CENTRE_SHAPES = new Set(['channel', 'tee', 'angle']);
 /** Shapes made of plates (or a thin wall) that can buckle locally. */
 const PLATED_SHAPES = new Set(['i-section', 'channel', 'tee', 'angle', 'box', 'tube']);
 
-function flexuralTorsional(context: CheckContext): CheckFindings {
+export function flexuralTorsionalChecks(context: CheckContext): CheckFindings {
   const { section, dimensions, material } = context.input;
   const mode = 'flexural-torsional-buckling' as const;
   const compressiveForce = context.peaks.axialCompression.value * section.area;
@@ -63,7 +63,7 @@ function flexuralTorsional(context: CheckContext): CheckFindings {
   return { checks: [check], notApplicable: [] };
 }
 
-function localBuckling(context: CheckContext): CheckFindings {
+export function localBucklingChecks(context: CheckContext): CheckFindings {
   const { section, dimensions, material } = context.input;
   const mode = 'local-buckling' as const;
   // Shear, from torque or from transverse force, is compression on the diagonal: a thin wall buckles under
@@ -86,17 +86,4 @@ function localBuckling(context: CheckContext): CheckFindings {
     reason: `${worst.element}: c/t = ${fourSignificantText(worst.ratio)} beyond the class 3 limit ${fourSignificantText(worst.limitClass3)} of EN 1993-1-1:2005 Table 5.2 (from memory): a slender (class 4) plate buckles locally before the section yields, and its effective width (EN 1993-1-5) is not evaluated here`,
   };
   return { checks: [], notApplicable: [], unchecked: [gap] };
-}
-
-export function openSectionStabilityChecks(context: CheckContext): CheckFindings {
-  const parts = [flexuralTorsional(context), localBuckling(context)];
-  const checks: FailureCheck[] = [];
-  const notApplicable: NotApplicableCheck[] = [];
-  const unchecked: UncheckedMode[] = [];
-  for (const part of parts) {
-    checks.push(...part.checks);
-    notApplicable.push(...part.notApplicable);
-    unchecked.push(...(part.unchecked ?? []));
-  }
-  return { checks, notApplicable, unchecked };
 }

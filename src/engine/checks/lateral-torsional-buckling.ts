@@ -36,31 +36,6 @@ import { isStructuralSteel } from './structural-steel.js';
 /** Common practice: a solid rectangle at least twice as deep as wide counts as a narrow, deep beam. */
 export const NARROW_RECTANGLE_DEPTH_RATIO = 2;
 
-export interface CriticalMomentInput {
-  readonly elasticModulus: number;
-  readonly shearModulus: number;
-  /** Minor-axis second moment, m^4. */
-  readonly secondMomentY: number;
-  readonly torsionConstant: number;
-  /** m^6 */
-  readonly warpingConstant: number;
-  /** m */
-  readonly effectiveLength: number;
-  readonly momentGradientFactor: number;
-}
-
-/** Elastic critical moment, N*m (formula above). */
-export function elasticCriticalMoment(input: CriticalMomentInput): number {
-  const { elasticModulus: e, shearModulus: g, effectiveLength: l } = input;
-  const torsionalRigidity = g * input.torsionConstant;
-  return (
-    input.momentGradientFactor *
-    (Math.PI / l) *
-    Math.sqrt(e * input.secondMomentY * torsionalRigidity) *
-    Math.sqrt(1 + (Math.PI ** 2 * e * input.warpingConstant) / (torsionalRigidity * l ** 2))
-  );
-}
-
 /**
  * Why the check does not apply to this section, or null when it does. Custom sections are checked with
  * the doubly symmetric formula from the It, Iw and Iy given (Iw = 0 when not given, which lowers M_cr).
@@ -249,8 +224,8 @@ export function lateralTorsionalChecks(context: CheckContext): {
   const { section, material, lateralTorsional = {} } = context.input;
   const mode = 'lateral-torsional-buckling' as const;
   if (lateralTorsional.braced) return notApplicable('the compression flange is braced continuously (lateralTorsional.braced)');
-  const weakAxisBending = largestMagnitudeOn(context.input.analysis, 'momentY', 0, context.input.model.length).value > 0;
-  if (!section.closed && section.secondMomentY > section.secondMomentZ && weakAxisBending && !(section.shape === 'rectangle' && section.width < NARROW_RECTANGLE_DEPTH_RATIO * section.depth)) {
+  const strongAboutY = !section.closed && section.secondMomentY > section.secondMomentZ && !(section.shape === 'rectangle' && section.width < NARROW_RECTANGLE_DEPTH_RATIO * section.depth);
+  if (strongAboutY && largestMagnitudeOn(context.input.analysis, 'momentY', 0, context.input.model.length).value > 0) {
     return unevaluated('bending about y, the strong axis of this section: its lateral-torsional buckling is not evaluated (this check is made for bending about z); turn the section so that z is its strong axis, or brace it (lateralTorsional.braced)');
   }
   const exclusion = lateralTorsionalExclusion(section);

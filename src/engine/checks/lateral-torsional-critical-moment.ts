@@ -16,8 +16,8 @@
  * - zj = zs - (1 / 2 Iz_major) integral s (t^2 + s^2) dA (ENV Annex F / SN003 definition, from
  *   memory; Trahair's beta_x / 2): positive when the flange with the larger minor-axis second moment
  *   is in compression, which raises M_cr; 0 for a doubly symmetric section.
- * With zg = zj = 0 and k = kw = 1 it is exactly the doubly symmetric formula of
- * lateral-torsional-buckling.ts: C1 (pi / L) sqrt(E I G J) sqrt(1 + pi^2 E Iw / (G J L^2)).
+ * With zg = zj = 0 and k = kw = 1 it is exactly the doubly symmetric formula of Timoshenko & Gere
+ * (2nd ed., ch. 6): C1 (pi / L) sqrt(E I G J) sqrt(1 + pi^2 E Iw / (G J L^2)).
  */
 
 import type { TeeDimensions } from '../sections/dimensions.js';
@@ -188,108 +188,4 @@ export function teeMonosymmetryParameter(tee: TeePlates, flangeInCompression: bo
     teeShearCentreHeight(tee),
   );
   return flangeInCompression ? zj : -zj;
-}
-
-/** An I with unequal flanges, the compression flange taken on top; fillets and welds ignored. */
-export interface MonosymmetricIPlates {
-  readonly depth: number;
-  readonly webThickness: number;
-  readonly compressionFlangeWidth: number;
-  readonly compressionFlangeThickness: number;
-  readonly tensionFlangeWidth: number;
-  readonly tensionFlangeThickness: number;
-}
-
-/** hs (distance between the flanges' mid-planes) and each flange's own minor-axis second moment t b^3 / 12. */
-function flangeProperties(section: MonosymmetricIPlates) {
-  const compression = (section.compressionFlangeThickness * section.compressionFlangeWidth ** 3) / 12;
-  const tension = (section.tensionFlangeThickness * section.tensionFlangeWidth ** 3) / 12;
-  const flangeDistance = section.depth - section.compressionFlangeThickness / 2 - section.tensionFlangeThickness / 2;
-  return { compression, tension, flangeDistance };
-}
-
-/**
- * Depth of the shear centre below the outer face of the compression flange, m: thin-walled, the
- * flanges share hs in inverse proportion to their minor second moments, e = hs I_t / (I_c + I_t) below
- * the compression flange's mid-plane (Timoshenko & Gere 2nd ed., ch. 5; Trahair; from memory).
- */
-export function monosymmetricIShearCentreDepth(section: MonosymmetricIPlates): number {
-  const { compression, tension, flangeDistance } = flangeProperties(section);
-  return section.compressionFlangeThickness / 2 + (flangeDistance * tension) / (compression + tension);
-}
-
-/** Iw = hs^2 I_c I_t / (I_c + I_t) of an I with unequal flanges, web neglected (Trahair; from memory), m^6. */
-export function monosymmetricIWarpingConstant(section: MonosymmetricIPlates): number {
-  const { compression, tension, flangeDistance } = flangeProperties(section);
-  return (flangeDistance ** 2 * compression * tension) / (compression + tension);
-}
-
-/** zj of an I with unequal flanges by the defining integral over its three plates (header), m. */
-export function monosymmetricIMonosymmetryParameter(section: MonosymmetricIPlates): number {
-  const tensionTop = section.tensionFlangeThickness;
-  const compressionBottom = section.depth - section.compressionFlangeThickness;
-  return monosymmetryOfPlates(
-    [
-      { width: section.tensionFlangeWidth, bottom: 0, top: tensionTop },
-      { width: section.webThickness, bottom: tensionTop, top: compressionBottom },
-      { width: section.compressionFlangeWidth, bottom: compressionBottom, top: section.depth },
-    ],
-    section.depth - monosymmetricIShearCentreDepth(section),
-  );
-}
-
-/**
- * zj ~ 0.4 hs (2 rho - 1), rho = I_c / (I_c + I_t): the thin-walled approximation for an I with
- * unequal flanges (ENV 1993-1-1:1992 Annex F, F.1.4, for the larger flange in compression; from
- * memory, clause number uncertain).
- */
-export function monosymmetryParameterApproximation(section: MonosymmetricIPlates): number {
-  const { compression, tension, flangeDistance } = flangeProperties(section);
-  return 0.4 * flangeDistance * ((2 * compression) / (compression + tension) - 1);
-}
-
-/**
- * zj = beta_x / 2 with beta_x = 0.9 hs (2 rho - 1) [1 - (I_minor / I_major)^2] (Kitipornchai & Trahair,
- * J. Struct. Div. ASCE 106(ST5), 1980; Trahair, Flexural-Torsional Buckling of Structures; from
- * memory). The section's two second moments are given: this module computes no section properties.
- */
-export function monosymmetryParameterKitipornchaiTrahair(
-  section: MonosymmetricIPlates,
-  secondMomentMinor: number,
-  secondMomentMajor: number,
-): number {
-  const { compression, tension, flangeDistance } = flangeProperties(section);
-  const rho = compression / (compression + tension);
-  return 0.45 * flangeDistance * (2 * rho - 1) * (1 - (secondMomentMinor / secondMomentMajor) ** 2);
-}
-
-export interface SingleAngleMajorAxisInput {
-  readonly elasticModulus: number;
-  /** A, m^2. */
-  readonly area: number;
-  /** r_z about the MINOR principal axis, m. */
-  readonly minorPrincipalRadiusOfGyration: number;
-  /** Leg thickness t, m. */
-  readonly thickness: number;
-  readonly unbracedLength: number;
-  /** Cb; AISC 360-16 F10.2 caps it at 1.5 for single angles (from memory). */
-  readonly momentGradientFactor: number;
-  /**
-   * beta_w, m: 0 for an equal-leg angle; for unequal legs tabulated in the AISC Manual, positive
-   * with the short leg in compression, negative with the long leg in compression (from memory).
-   */
-  readonly asymmetryCoefficient: number;
-}
-
-/**
- * A single angle bent about its MAJOR principal axis, elastic:
- *   M_cr = (9 E A r_z t Cb / (8 L)) [ sqrt(1 + (4.4 beta_w r_z / (L t))^2) + 4.4 beta_w r_z / (L t) ]
- * (AISC 360-16 eq. F10-4, from memory; it takes E / G = 2.6). For an equal leg angle it is
- * (pi / L) sqrt(E I_z G J) with the thin-walled I_z = A r_z^2 and J = A t^2 / 3. Bending about a
- * geometric axis (AISC F10-5) is not covered here.
- */
-export function singleAngleMajorAxisCriticalMoment(input: SingleAngleMajorAxisInput): number {
-  const { elasticModulus: e, area, minorPrincipalRadiusOfGyration: rz, thickness: t, unbracedLength: l } = input;
-  const asymmetry = (4.4 * input.asymmetryCoefficient * rz) / (l * t);
-  return ((9 * e * area * rz * t * input.momentGradientFactor) / (8 * l)) * (Math.sqrt(1 + asymmetry ** 2) + asymmetry);
 }

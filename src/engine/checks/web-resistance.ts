@@ -12,9 +12,9 @@
  */
 
 import { EngineError } from '../engine-error.js';
+import { slendernessEpsilon } from './outstand-slenderness.js';
 
-/** Reference yield strength in epsilon = sqrt(235 / fy [MPa]) (EN 1993-1-1:2005, Table 5.2). */
-const EPSILON_REFERENCE_STRENGTH = 235e6;
+/** E of steel when none is given (EN 1993-1-1:2005, 3.2.6, from memory). */
 const DEFAULT_ELASTIC_MODULUS = 210e9;
 /** Eta = 1.2 up to S460 and 1.0 above (EN 1993-1-5:2006, 5.1(2) Note 2, recommended value; a National Annex may differ). */
 const ETA_UP_TO_S460 = 1.2;
@@ -23,10 +23,6 @@ const S460_YIELD_STRENGTH = 460e6;
 /** The EN 1993 rules stop at S700 (EN 1993-1-12:2007 extends them from S460 to S700, from memory). */
 const HIGHEST_COVERED_YIELD_STRENGTH = 700e6;
 
-/** sqrt(235 MPa / fy) (EN 1993-1-1:2005, Table 5.2). */
-export function steelEpsilon(yieldStrength: number): number {
-  return Math.sqrt(EPSILON_REFERENCE_STRENGTH / yieldStrength);
-}
 
 /** The recommended eta for a yield strength (EN 1993-1-5:2006, 5.1(2) Note 2). */
 export function recommendedShearAreaFactor(yieldStrength: number): number {
@@ -164,7 +160,7 @@ export function webShearBucklingResistance(input: WebShearBucklingInput): WebShe
     reasons.push(`eta = ${shearAreaFactor} is outside 1.0 to 1.2 (EN 1993-1-5:2006, 5.1(2) Note 2)`);
   }
 
-  const epsilon = steelEpsilon(webYieldStrength);
+  const epsilon = slendernessEpsilon(webYieldStrength);
   const webSlendernessRatio = webDepth / webThickness;
   const kTau = shearBucklingCoefficient(webDepth, spacing);
   // 5.1(2): 72 eps / eta for a web stiffened at the supports only, 31 eps sqrt(k_tau) / eta with intermediate stiffeners.

@@ -17,7 +17,8 @@ import { largestMagnitudeOn } from './critical-positions.js';
 import { failureCheck } from './failure-check.js';
 import { fourSignificantText } from './number-texts.js';
 import { isStructuralSteel } from './structural-steel.js';
-import { patchLoadingResistance, steelEpsilon, webShearBucklingResistance, type PatchLoadingResult, type WebShearBucklingResult } from './web-resistance.js';
+import { slendernessEpsilon } from './outstand-slenderness.js';
+import { patchLoadingResistance, webShearBucklingResistance, type PatchLoadingResult, type WebShearBucklingResult } from './web-resistance.js';
 
 type FlangedDimensions = ISectionDimensions | ChannelDimensions;
 
@@ -167,7 +168,7 @@ export function webStabilityChecks(context: CheckContext): CheckFindings {
 
   const forces = concentratedForces(context);
   // EN 1993-1-5:2006 6.5(1) (from memory): the flange counts at most 15 eps tf either side of the web.
-  const outstandLimit = 15 * steelEpsilon(material.yieldStrength) * dimensions.flangeThickness;
+  const outstandLimit = 15 * slendernessEpsilon(material.yieldStrength) * dimensions.flangeThickness;
   const sides = dimensions.shape === 'i-section' ? 2 : 1;
   const bearingFlangeWidth = Math.min(dimensions.flangeWidth, dimensions.webThickness + sides * outstandLimit);
   if (forces.length === 0) {

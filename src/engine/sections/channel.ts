@@ -19,6 +19,7 @@ import { outlineValues, summariseRegion } from './composite-region.js';
 import type { ShearCut } from './composite-region.js';
 import type { ChannelDimensions } from './dimensions.js';
 import { cornerJunctionTorsionConstant, plateTorsionConstant, torsionConstantWithinBounds } from './open-section-torsion.js';
+import { channelWarpingConstant } from './shear-centre.js';
 import { filletParts, rectanglePart } from './region-parts.js';
 import type { RegionPart } from './region-parts.js';
 import { assembleSectionProperties } from './section-assembly.js';
@@ -54,11 +55,7 @@ export function channelProperties(dimensions: ChannelDimensions): SectionPropert
     [b, h],
     region.secondMomentZ + region.secondMomentY,
   );
-  const flangeMidWidth = b - tw / 2;
-  const webMidDepth = h - tf;
-  const warpingConstant =
-    ((tf * flangeMidWidth ** 3 * webMidDepth ** 2) / 12) *
-    ((3 * flangeMidWidth * tf + 2 * webMidDepth * tw) / (6 * flangeMidWidth * tf + webMidDepth * tw));
+  const warpingConstant = channelWarpingConstant(dimensions);
   return assembleSectionProperties({
     shape: 'channel',
     depth: h,

@@ -41,7 +41,7 @@ export interface CentroidPosition {
 }
 
 /** Channel: the shear centre's distance e from the web mid-line, m, on the back of the web. */
-export function channelShearCentreDistance(dimensions: ChannelDimensions): number {
+export function channelShearCentreDistance(dimensions: Pick<ChannelDimensions, 'flangeWidth' | 'depth' | 'webThickness' | 'flangeThickness'>): number {
   const { flangeWidth: b, depth: h, webThickness: tw, flangeThickness: tf } = dimensions;
   const flangeMid = b - tw / 2;
   const webMid = h - tf;
@@ -50,7 +50,7 @@ export function channelShearCentreDistance(dimensions: ChannelDimensions): numbe
 }
 
 /** Channel: Iw = tf b'^3 h'^2 / 12 (3 b' tf + 2 h' tw) / (6 b' tf + h' tw), m^6 (AISC DG9, App. A, from memory). */
-export function channelWarpingConstant(dimensions: ChannelDimensions): number {
+export function channelWarpingConstant(dimensions: Pick<ChannelDimensions, 'flangeWidth' | 'depth' | 'webThickness' | 'flangeThickness'>): number {
   const { flangeWidth: b, depth: h, webThickness: tw, flangeThickness: tf } = dimensions;
   const flangeMid = b - tw / 2;
   const webMid = h - tf;

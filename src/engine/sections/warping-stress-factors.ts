@@ -27,6 +27,7 @@
  */
 
 import { EngineError } from '../engine-error.js';
+import { channelShearCentreDistance } from './shear-centre.js';
 
 export interface ThinWalledFlangedDimensions {
   /** h, m */
@@ -95,20 +96,13 @@ export function iSectionWarpingStressFactors(d: ThinWalledFlangedDimensions): Wa
   return factors((hs * b) / 4, (hs * b * b * tf) / 16, tf, (tf * b ** 3 * hs ** 2) / 24);
 }
 
-/** The thin-walled shear centre of a channel from its web mid-line, e0 (DG9 2nd ed., Appendix A; from memory). */
-export function channelShearCentreFromWeb(d: ThinWalledFlangedDimensions): number {
-  const bm = d.flangeWidth - d.webThickness / 2;
-  const hm = d.depth - d.flangeThickness;
-  return (3 * bm * bm * d.flangeThickness) / (6 * bm * d.flangeThickness + hm * d.webThickness);
-}
-
 /** Channel, omega_n about the shear centre (derivation in the module comment). */
 export function channelWarpingStressFactors(d: ChannelWarpingDimensions): WarpingStressFactors {
   requireFlanged(d);
   const { flangeThickness: tf, webThickness: tw } = d;
   const bm = d.flangeWidth - tw / 2;
   const hm = d.depth - tf;
-  const e0 = d.shearCentreFromWeb ?? channelShearCentreFromWeb(d);
+  const e0 = d.shearCentreFromWeb ?? channelShearCentreDistance(d);
   if (!(Number.isFinite(e0) && e0 >= 0 && e0 < bm)) {
     throw new EngineError('impossible-geometry', `The shear centre must lie between the web and the flange tips' width from it, not at ${e0} m.`, ['section', 'shearCentreFromWeb']);
   }

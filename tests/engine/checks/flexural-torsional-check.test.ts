@@ -3,7 +3,7 @@ import { analyseMember } from '../../../src/engine/analysis/analyse-member.js';
 import { buildCheckContext } from '../../../src/engine/checks/check-context.js';
 import type { MemberCheckInput } from '../../../src/engine/checks/check-input.js';
 import { checkMember } from '../../../src/engine/checks/check-member.js';
-import { openSectionStabilityChecks } from '../../../src/engine/checks/flexural-torsional-check.js';
+import { flexuralTorsionalChecks, localBucklingChecks } from '../../../src/engine/checks/flexural-torsional-check.js';
 import type { LoadModel, MemberModel, SupportModel } from '../../../src/engine/member/model.js';
 import type { Material } from '../../../src/engine/materials/material.js';
 import type { SectionDimensions } from '../../../src/engine/sections/dimensions.js';
@@ -26,7 +26,16 @@ function strut(dimensions: SectionDimensions, length: number, compression: numbe
   return analysedInput(dimensions, steel, length, [support(0, PIN), support(length, ROLLER)], [{ kind: 'point', position: length, ...FREE_LOAD, fx: -compression }]);
 }
 
-const findingsOf = (input: MemberCheckInput) => openSectionStabilityChecks(buildCheckContext(input));
+/** Both modules' findings together, in check-member.ts's order. */
+const findingsOf = (input: MemberCheckInput) => {
+  const context = buildCheckContext(input);
+  const parts = [flexuralTorsionalChecks(context), localBucklingChecks(context)];
+  return {
+    checks: parts.flatMap((part) => part.checks),
+    notApplicable: parts.flatMap((part) => part.notApplicable),
+    unchecked: parts.flatMap((part) => part.unchecked ?? []),
+  };
+};
 
 /** Johnson's parabola above Sy / 2 (Shigley 10th ed., eqs. 4-44 and 4-46, from memory), as a load. */
 function johnsonLoad(elasticLoad: number, area: number, yieldStrength: number): number {

@@ -1,9 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-  elasticCriticalMoment,
-  lateralTorsionalChecks,
-  lateralTorsionalExclusion,
-} from '../../../src/engine/checks/lateral-torsional-buckling.js';
+import { lateralTorsionalChecks, lateralTorsionalExclusion } from '../../../src/engine/checks/lateral-torsional-buckling.js';
+import { generalCriticalMoment } from '../../../src/engine/checks/lateral-torsional-critical-moment.js';
 import { cantileverTipLoad, FIXED, PIN, ROLLER, simpleSpanUniformLoad, support, uniformMoment } from './fixtures/analyses.js';
 import { contextOf, relativeError } from './fixtures/inputs.js';
 import { steel } from './fixtures/materials.js';
@@ -13,30 +10,30 @@ import { iSection, rectangle, round, tee } from './fixtures/sections.js';
 // J = (2 * 0.1 * 0.0085^3 + 0.1915 * 0.0056^3) / 3 = 5.2152e-8 m^4, Iw = 0.0085 * 0.1^3 * 0.1915^2 / 24 = 1.29881e-8 m^6.
 const section = iSection(0.2, 0.1, 0.0056, 0.0085);
 
-describe('elasticCriticalMoment', () => {
+describe('the elastic critical moment through the shear centre (generalCriticalMoment with zg = zj = 0)', () => {
   it('matches the Timoshenko & Gere closed form for a simply supported I-beam in uniform moment (C1 = 1)', () => {
     // L = 4 m: E Iy = 298061, G J = 4224.3, (pi / 4) sqrt(1.25911e9) = 27869; pi^2 E Iw / (G J L^2) = 26919 / 67589
     // = 0.39828; M_cr = 27869 * sqrt(1.39828) = 32955 N*m (Theory of Elastic Stability, 2nd ed., ch. 6, from memory).
     expect(section.secondMomentY).toBeCloseTo(1.41934e-6, 10);
     expect(section.torsionConstant).toBeCloseTo(5.2152e-8, 11);
     expect(section.warpingConstant).toBeCloseTo(1.29881e-8, 12);
-    const moment = elasticCriticalMoment({
+    const moment = generalCriticalMoment({
       elasticModulus: steel.elasticModulus,
       shearModulus: steel.shearModulus,
       secondMomentY: section.secondMomentY,
       torsionConstant: section.torsionConstant,
       warpingConstant: section.warpingConstant,
-      effectiveLength: 4,
-      momentGradientFactor: 1,
+      unbracedLength: 4,
+      factors: { c1: 1, c2: 0, c3: 0 },
     });
     expect(relativeError(moment, 32955)).toBeLessThan(1e-3);
   });
 
   it('reduces to (pi / L) sqrt(E Iy G J) for a narrow rectangle (no warping) and scales with C1', () => {
-    const base = { elasticModulus: 200e9, shearModulus: 80e9, secondMomentY: 1e-7, torsionConstant: 4e-7, warpingConstant: 0, effectiveLength: 2 };
+    const base = { elasticModulus: 200e9, shearModulus: 80e9, secondMomentY: 1e-7, torsionConstant: 4e-7, warpingConstant: 0, unbracedLength: 2 };
     const expected = (Math.PI / 2) * Math.sqrt(200e9 * 1e-7 * 80e9 * 4e-7);
-    expect(elasticCriticalMoment({ ...base, momentGradientFactor: 1 })).toBeCloseTo(expected, 6);
-    expect(elasticCriticalMoment({ ...base, momentGradientFactor: 1.75 })).toBeCloseTo(1.75 * expected, 6);
+    expect(generalCriticalMoment({ ...base, factors: { c1: 1, c2: 0, c3: 0 } })).toBeCloseTo(expected, 6);
+    expect(generalCriticalMoment({ ...base, factors: { c1: 1.75, c2: 0, c3: 0 } })).toBeCloseTo(1.75 * expected, 6);
   });
 });
 

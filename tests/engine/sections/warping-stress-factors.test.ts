@@ -1,10 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { EngineError } from '../../../src/engine/engine-error.js';
-import {
-  channelShearCentreFromWeb,
-  channelWarpingStressFactors,
-  iSectionWarpingStressFactors,
-} from '../../../src/engine/sections/warping-stress-factors.js';
+import { channelShearCentreDistance } from '../../../src/engine/sections/shear-centre.js';
+import { channelWarpingStressFactors, iSectionWarpingStressFactors } from '../../../src/engine/sections/warping-stress-factors.js';
 
 const near = (actual: number, expected: number, relative = 1e-12) =>
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(relative * Math.abs(expected));
@@ -39,7 +36,7 @@ describe('a channel 200 x 80, web 6, flanges 11 (mm, thin-walled)', () => {
   const f = channelWarpingStressFactors(d);
 
   it('places the shear centre at e0 = 3 b\'^2 tf/(6 b\' tf + h\' tw) = 31.48 mm from the web mid-line', () => {
-    near(channelShearCentreFromWeb(d), e0);
+    near(channelShearCentreDistance(d), e0);
     near(e0, 0.0314764, 1e-5);
   });
 

@@ -21,6 +21,9 @@ export function embeddedCatalogues(): Promise<LoadedCatalogues> {
 export async function testApp(options: AppOptions = {}): Promise<FastifyInstance> {
   return buildApp({
     catalogues: await embeddedCatalogues(),
+    // A busy test machine can stall the event loop past the shedding threshold and turn a test's
+    // request into a 503; load shedding is tested on its own (tests/api/overload.test.ts passes its own).
+    overload: { maxEventLoopDelayMs: 0 },
     observeExchange: (request, statusCode, payload) => checkExchange(request.method, request.routeOptions.url, statusCode, request.body, payload),
     ...options,
   });
